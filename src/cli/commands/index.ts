@@ -1,0 +1,7 @@
+import { compute } from './compute';
+import type { CliCommand } from './types';
+
+/** Every CLI command by name; a new command is one file and one line here. */
+export const commands: Record<string, CliCommand> = {
+  compute,
+};
