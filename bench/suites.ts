@@ -1,0 +1,4 @@
+import type { BenchSuite } from './types';
+
+/** Every benchmark section, in report order; `npm run bench -- <name>` runs only the named ones. */
+export const suites: BenchSuite[] = [];
