@@ -1,0 +1,68 @@
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import express from 'express';
+import helmet from 'helmet';
+import type { Logger } from 'pino';
+import type { Sequelize } from 'sequelize';
+import type { Config } from './config';
+import type { Example } from './examples';
+import { apiNotFound, errorHandler } from './http/error-handler';
+import { requestIds } from './http/request-id';
+import { examplesRouter } from './routes/examples';
+import { healthRouter } from './routes/health';
+
+/** Everything the app needs from outside; built by server/index.ts or by a test. */
+export interface AppDeps {
+  config: Config;
+  sequelize: Sequelize;
+  log: Logger;
+  examples: Example[];
+  /** Folder of the built client; when it holds no index.html only the API is served. */
+  clientDir: string;
+}
+
+/** Builds the Express app without listening, so tests can start it on any port. */
+export function createApp(deps: AppDeps): express.Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 1);
+  app.use(requestIds(deps.log));
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          workerSrc: ["'self'", 'blob:'],
+          // Chart libraries set inline style attributes; scripts stay strictly same-origin.
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: deps.config.production ? [] : null,
+        },
+      },
+    }),
+  );
+  app.use('/api', express.json({ limit: '256kb' }));
+
+  app.use('/api/health', healthRouter(deps));
+  app.use('/api/examples', examplesRouter(deps.examples));
+  app.use('/api', apiNotFound);
+
+  serveClient(app, deps.clientDir);
+  app.use(errorHandler(deps.log));
+  return app;
+}
+
+function serveClient(app: express.Express, clientDir: string): void {
+  const index = join(clientDir, 'index.html');
+  app.use('/assets', express.static(join(clientDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
+  app.use(express.static(clientDir, { index: false }));
+  app.get('/{*splat}', (_req, res, next) => {
+    if (!existsSync(index)) return next();
+    res.sendFile(index);
+  });
+}

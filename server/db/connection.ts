@@ -1,0 +1,58 @@
+import { mkdirSync } from 'node:fs';
+import { dirname } from 'node:path';
+import { Sequelize } from 'sequelize';
+
+/**
+ * PRAGMAs set on every SQLite connection. WAL lets readers run while one writer commits;
+ * synchronous=FULL makes each commit durable before it is acknowledged, so an answered save
+ * survives a killed process or a power cut (SQLite documentation, "Write-Ahead Logging" and
+ * "PRAGMA synchronous"); busy_timeout waits for a lock instead of failing at once.
+ */
+export const SQLITE_PRAGMAS = [
+  'PRAGMA journal_mode = WAL',
+  'PRAGMA synchronous = FULL',
+  'PRAGMA busy_timeout = 10000',
+  'PRAGMA foreign_keys = ON',
+];
+
+interface SqliteConnection {
+  exec(sql: string, cb: (err: Error | null) => void): void;
+}
+
+/** Opens the embedded SQLite database (creating its folder) with the product's PRAGMAs. */
+export async function openDatabase(storage: string): Promise<Sequelize> {
+  if (storage !== ':memory:') mkdirSync(dirname(storage), { recursive: true });
+  const sequelize = new Sequelize({ dialect: 'sqlite', storage, logging: false });
+  configureEachConnection(sequelize);
+  await sequelize.authenticate();
+  return sequelize;
+}
+
+/**
+ * Sequelize's SQLite dialect opens one connection per transaction and runs no connect hooks, so the
+ * PRAGMAs are applied by wrapping its connection manager: every connection is configured once,
+ * before its first use.
+ */
+function configureEachConnection(sequelize: Sequelize): void {
+  const manager = sequelize.connectionManager as unknown as { getConnection(options?: unknown): Promise<SqliteConnection> };
+  const original = manager.getConnection.bind(manager);
+  const configured = new WeakSet<SqliteConnection>();
+  manager.getConnection = async (options?: unknown) => {
+    const connection = await original(options);
+    if (!configured.has(connection)) {
+      configured.add(connection);
+      await new Promise<void>((resolve, reject) =>
+        connection.exec(`${SQLITE_PRAGMAS.join(';\n')};`, (err) => (err ? reject(err) : resolve())),
+      );
+    }
+    return connection;
+  };
+}
+
+/** What /api/health reports about the database. */
+export interface DatabaseState {
+  ok: boolean;
+  dialect: string;
+  journalMode?: string;
+  migrations: { applied: number; pending: number };
+}

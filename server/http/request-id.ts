@@ -1,0 +1,21 @@
+import type { RequestHandler } from 'express';
+import { randomUUID } from 'node:crypto';
+import type { Logger } from 'pino';
+
+/**
+ * Gives every request an id (echoed in the X-Request-Id header and in error bodies) and logs one
+ * line when it finishes, with method, path, status and duration; never headers or bodies.
+ */
+export function requestIds(log: Logger): RequestHandler {
+  return (req, res, next) => {
+    const id = randomUUID();
+    (req as { id?: string }).id = id;
+    res.setHeader('X-Request-Id', id);
+    const start = process.hrtime.bigint();
+    res.on('finish', () => {
+      const ms = Number(process.hrtime.bigint() - start) / 1e6;
+      log.info({ requestId: id, method: req.method, path: req.originalUrl.split('?')[0], status: res.statusCode, ms: Math.round(ms * 10) / 10 }, 'request');
+    });
+    next();
+  };
+}
