@@ -14,3 +14,4 @@ export { RESULT_FORMAT } from './result-types';
 export type { LedgerYear, OptionResult, ScenarioResult } from './result-types';
 export { ENGINE_VERSION } from './version';
 export { parseScenario } from './parse';
+export * from './measurements';
