@@ -30,7 +30,7 @@ export function utf8ByteLength(text: string): number {
 
 /**
  * Splits CSV text into non-blank rows with papaparse. Refuses a file over `maxBytes`, an empty file,
- * broken quoting, and values separated by anything but commas (semicolons, tabs, vertical bars).
+ * broken quoting, and values separated by semicolons, tabs or vertical bars instead of commas.
  * Line numbers assume no line break inside a quoted cell, which numeric measurement files never need.
  */
 export function readCsvRows(text: string, maxBytes: number = DEFAULT_MAX_BYTES): FileChecked<CsvRow[]> {
@@ -41,21 +41,17 @@ export function readCsvRows(text: string, maxBytes: number = DEFAULT_MAX_BYTES):
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   if (body.trim() === '') return refused([lineProblem(1, 'the file is empty')]);
 
-  const parsed = Papa.parse<string[]>(body, { delimitersToGuess: [',', ';', '\t', '|'], skipEmptyLines: false });
+  // the delimiter is fixed rather than guessed: papaparse's guess needs many lines to be sure
+  const parsed = Papa.parse<string[]>(body, { delimiter: ',', skipEmptyLines: false });
   const rows = parsed.data
     .map((cells, i) => ({ line: i + 1, cells: cells.map((c) => c.trim()) }))
     .filter((r) => r.cells.some((c) => c !== ''));
-  const problems: FileProblem[] = parsed.errors
-    .filter((e) => e.code !== 'UndetectableDelimiter')
-    .map((e) => lineProblem((e.row ?? 0) + 1, `${e.message.replace(/\.$/, '').toLowerCase()}`));
-
-  const delimiter = parsed.meta.delimiter;
-  if (delimiter !== ',') {
-    const first = rows.find((r) => r.cells.length > 1) ?? rows[0];
-    problems.push(
-      lineProblem(first?.line ?? 1, `values are separated by ${DELIMITER_NAMES[delimiter] ?? `"${delimiter}"`}; separate them with commas and write decimals with a point`),
-    );
+  const foreign = rows.find((r) => r.cells.some((c) => /[;\t|]/.test(c)));
+  if (foreign) {
+    const mark = /[;\t|]/.exec(foreign.cells.find((c) => /[;\t|]/.test(c)) ?? '')?.[0] ?? ';';
+    return refused([lineProblem(foreign.line, `values are separated by ${DELIMITER_NAMES[mark]}; separate them with commas and write decimals with a point`)]);
   }
+  const problems: FileProblem[] = parsed.errors.map((e) => lineProblem((e.row ?? 0) + 1, `${e.message.replace(/\.$/, '').toLowerCase()}`));
   if (rows.length === 0) problems.push(lineProblem(1, 'the file has no values'));
   return problems.length > 0 ? refused(problems) : { ok: true, value: rows };
 }
@@ -69,10 +65,8 @@ export function numberCell(cell: string): number | null {
   return Number.isFinite(value) ? value : null;
 }
 
-/** Why a cell is not a number, hinting at a wrong delimiter or decimal comma when the cell shows one. */
+/** Why a cell is not a number (an over-long cell is shortened). */
 export function notANumber(column: number, cell: string): string {
   if (cell === '') return `column ${column} is empty`;
-  const base = `column ${column}: "${cell.length > 40 ? `${cell.slice(0, 40)}…` : cell}" is not a number`;
-  if (/[;\t|]/.test(cell)) return `${base} (it holds another separator; separate values with commas)`;
-  return base;
+  return `column ${column}: "${cell.length > 40 ? `${cell.slice(0, 40)}…` : cell}" is not a number`;
 }
