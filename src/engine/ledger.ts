@@ -59,9 +59,11 @@ export function priceLedger(s: Scenario, o: Option, plan: OptionPlan, prices: De
   const used = dec(plan.fixturesUsed);
   const unitCapex = dec(o.fixturePrice ?? 0).plus(o.installPrice).minus(o.rebate);
   const capex = dec(plan.fixturesBought).times(unitCapex);
-  const energyKwh = dec(plan.energyKwhPerYear);
-  const coolingKwh = dec(plan.coolingKwhPerYear);
-  const demand = dec(plan.demandKw).times(s.electricity.demandChargePerKwMonth).times(12);
+  // Energy is recomputed from its factors in decimals so that money never inherits float noise.
+  const kw = used.times(o.wallWatts).div(1000);
+  const energyKwh = kw.times(plan.litHoursPerYear);
+  const coolingKwh = s.cooling ? energyKwh.times(s.cooling.share).div(s.cooling.cop) : ZERO;
+  const demand = kw.times(s.electricity.demandChargePerKwMonth).times(12);
   const lampSet = o.lamp ? used.times(o.lamp.price) : ZERO;
 
   const years: DecimalYear[] = [

@@ -34,6 +34,8 @@ export interface OptionPlan {
   energyKwhPerYear: number;
   /** kWh per year */
   coolingKwhPerYear: number;
+  /** h per year, as in the basis */
+  litHoursPerYear: number;
   /** kW of lighting load that demand charges apply to */
   demandKw: number;
   /** lamp sets replaced per fixture, indexed by year 0..N */
@@ -64,6 +66,7 @@ export function planOption(s: Scenario, basis: ScenarioBasis, o: Option, efficac
     achievedPpfd: lv.achievedPpfd,
     energyKwhPerYear: energy,
     coolingKwhPerYear: cooling,
+    litHoursPerYear: basis.hours,
     demandKw: (lv.used * o.wallWatts) / 1000,
     replacementsPerFixture: o.lamp
       ? replacementsByYear(basis.hours, basis.horizon, o.lamp.replaceEveryHours)
