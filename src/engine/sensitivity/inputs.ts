@@ -107,11 +107,14 @@ export function numericInputs(s: Scenario): NumericInput[] {
   return out;
 }
 
-/** Moves a value into an input's bounds (and to a whole number where required). */
+/**
+ * Moves a value into an input's bounds (and to the nearest whole number where required). Exclusive
+ * minimums are all 0, which a relative move of less than 100 % from a positive value never reaches.
+ */
 export function clampToBounds(value: number, b: InputBounds): number {
   let v = b.integer ? Math.round(value) : value;
   if (v > b.max) v = b.max;
-  if (v < b.min || (!b.minInclusive && v === b.min)) v = b.minInclusive ? b.min : v;
+  if (b.minInclusive && v < b.min) v = b.min;
   return v;
 }
 
