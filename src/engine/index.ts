@@ -15,3 +15,4 @@ export type { LedgerYear, OptionResult, ScenarioResult } from './result-types';
 export { ENGINE_VERSION } from './version';
 export { parseScenario } from './parse';
 export * from './measurements';
+export * from './sensitivity';

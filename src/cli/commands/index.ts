@@ -1,6 +1,8 @@
 import { compute } from './compute';
 import { grid } from './grid';
 import { spectrum } from './spectrum';
+import { sweep } from './sweep';
+import { breakeven } from './breakeven';
 import type { CliCommand } from './types';
 
 /** Every CLI command by name; a new command is one file and one line here. */
@@ -8,4 +10,6 @@ export const commands: Record<string, CliCommand> = {
   compute,
   grid,
   spectrum,
+  sweep,
+  breakeven,
 };
