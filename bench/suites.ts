@@ -1,4 +1,5 @@
+import { engineSuite } from './engine';
 import type { BenchSuite } from './types';
 
 /** Every benchmark section, in report order; `npm run bench -- <name>` runs only the named ones. */
-export const suites: BenchSuite[] = [];
+export const suites: BenchSuite[] = [engineSuite];

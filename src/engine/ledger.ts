@@ -1,5 +1,6 @@
 import type { Option, Scenario } from '../contracts/scenario';
-import { Decimal, ZERO, dec } from './money';
+import { ZERO, dec } from './money';
+import type { Decimal } from './money';
 import type { OptionPlan } from './plan';
 
 /** One year of an option's cash flows, in decimals. */
