@@ -1,6 +1,7 @@
-import { mkdirSync } from 'node:fs';
+import { accessSync, constants, mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import { Sequelize } from 'sequelize';
+import { ConfigError } from '../config';
 
 /**
  * PRAGMAs set on every SQLite connection. WAL lets readers run while one writer commits;
@@ -21,11 +22,19 @@ interface SqliteConnection {
 
 /** Opens the embedded SQLite database (creating its folder) with the product's PRAGMAs. */
 export async function openDatabase(storage: string): Promise<Sequelize> {
-  if (storage !== ':memory:') mkdirSync(dirname(storage), { recursive: true });
-  const sequelize = new Sequelize({ dialect: 'sqlite', storage, logging: false });
-  configureEachConnection(sequelize);
-  await sequelize.authenticate();
-  return sequelize;
+  try {
+    if (storage !== ':memory:') {
+      mkdirSync(dirname(storage), { recursive: true });
+      accessSync(dirname(storage), constants.W_OK);
+    }
+    const sequelize = new Sequelize({ dialect: 'sqlite', storage, logging: false });
+    configureEachConnection(sequelize);
+    await sequelize.authenticate();
+    return sequelize;
+  } catch (error) {
+    const reason = (error as NodeJS.ErrnoException).code ?? (error as Error).message;
+    throw new ConfigError(`the database file ${storage} cannot be created or written (${reason}); set DATABASE_PATH to a writable place`);
+  }
 }
 
 /**
