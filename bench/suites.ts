@@ -1,5 +1,6 @@
 import { engineSuite } from './engine';
+import { measurementsSuite } from './measurements';
 import type { BenchSuite } from './types';
 
 /** Every benchmark section, in report order; `npm run bench -- <name>` runs only the named ones. */
-export const suites: BenchSuite[] = [engineSuite];
+export const suites: BenchSuite[] = [engineSuite, measurementsSuite];
