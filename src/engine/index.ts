@@ -14,5 +14,7 @@ export { RESULT_FORMAT } from './result-types';
 export type { LedgerYear, OptionResult, ScenarioResult } from './result-types';
 export { ENGINE_VERSION } from './version';
 export { parseScenario } from './parse';
+export { compareResults, FIGURE_TOLERANCE } from './reproduce';
+export type { FigureDifference, ReproduceReport } from './reproduce';
 export * from './measurements';
 export * from './sensitivity';
