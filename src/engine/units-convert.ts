@@ -42,8 +42,8 @@ export function btuPerHourToWatts(btuPerHour: number): number {
   return btuPerHour / BTU_PER_HOUR_PER_WATT;
 }
 
-/** The two ways figures can be shown: SI throughout, or imperial lengths, areas and heat flows. */
-export type UnitSystem = 'metric' | 'imperial';
+/** The two ways figures can be shown: SI throughout ('si'), or imperial lengths, areas and heat flows. */
+export type UnitSystem = 'si' | 'imperial';
 
 /** A length in m shown in the chosen system: the value and its unit symbol. */
 export function displayLength(metres: number, system: UnitSystem): { value: number; unit: 'm' | 'ft' } {

@@ -45,9 +45,9 @@ describe('units-convert', () => {
   });
 
   it('shows SI figures unchanged in the metric system and converts them in the imperial one', () => {
-    expect(displayLength(3, 'metric')).toEqual({ value: 3, unit: 'm' });
-    expect(displayArea(24, 'metric')).toEqual({ value: 24, unit: 'm²' });
-    expect(displayHeat(640, 'metric')).toEqual({ value: 640, unit: 'W' });
+    expect(displayLength(3, 'si')).toEqual({ value: 3, unit: 'm' });
+    expect(displayArea(24, 'si')).toEqual({ value: 24, unit: 'm²' });
+    expect(displayHeat(640, 'si')).toEqual({ value: 640, unit: 'W' });
     expect(displayLength(3.048, 'imperial').unit).toBe('ft');
     expect(displayLength(3.048, 'imperial').value).toBeCloseTo(10, 12);
     expect(displayArea(1.48644864, 'imperial').value).toBeCloseTo(16, 12);

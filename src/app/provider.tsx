@@ -1,0 +1,10 @@
+import { QueryClientProvider } from '@tanstack/react-query';
+import { useState } from 'react';
+import type { ReactNode } from 'react';
+import { createQueryClient } from '../lib/query-client';
+
+/** App-wide providers: the one query client. */
+export function AppProvider({ children }: { children: ReactNode }) {
+  const [client] = useState(createQueryClient);
+  return <QueryClientProvider client={client}>{children}</QueryClientProvider>;
+}
