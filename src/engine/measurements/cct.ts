@@ -7,8 +7,9 @@ export interface Cct {
   duv: number;
 }
 
-/** Range of the Planckian table searched, K; outside it no CCT is given. */
+/** Lowest CCT given, K (the Planckian table starts here). */
 export const CCT_MIN_K = 1000;
+/** Highest CCT given, K (the Planckian table ends here). */
 export const CCT_MAX_K = 20000;
 /** Farthest from the Planckian locus a CCT is still given (CIE 15: |Duv| ≤ 0.05). */
 export const MAX_ABS_DUV = 0.05;

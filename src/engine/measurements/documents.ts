@@ -1,9 +1,9 @@
 import type { PpfdGridSummary } from './grid-summary';
 import type { SpectrumSummary } from './spectrum-summary';
 
-/** Format tag of a grid summary document, version 1 (../shared/spec/cli.md). */
+/** Format tag of a grid summary document, version 1 (/work/shared/spec/cli.md). */
 export const GRID_FORMAT = 'photon-parity/grid@1';
-/** Format tag of a spectrum summary document, version 1 (../shared/spec/cli.md). */
+/** Format tag of a spectrum summary document, version 1 (/work/shared/spec/cli.md). */
 export const SPECTRUM_FORMAT = 'photon-parity/spectrum@1';
 
 /** `photon-parity/grid@1`: PPFD figures in µmol m⁻² s⁻¹, ratios as fractions; the canopy fields only when known. */

@@ -1,10 +1,6 @@
 import { CIE_1931_2DEG_CMF } from './reference-data/cie-1931-2deg-cmf';
 import { MCCREE_1972_RQY } from './reference-data/mccree-1972-relative-quantum-yield';
 
-/** First and last wavelength of the CIE 1931 table, nm. */
-export const CMF_FROM_NM = CIE_1931_2DEG_CMF.startNm;
-export const CMF_TO_NM = CIE_1931_2DEG_CMF.startNm + (CIE_1931_2DEG_CMF.xBar.length - 1) * CIE_1931_2DEG_CMF.stepNm;
-
 /** Wavelengths of McCree's table, nm; the yield curve bends only there. */
 export const MCCREE_KNOTS_NM: readonly number[] = MCCREE_1972_RQY.fieldMean.map((_, i) => MCCREE_1972_RQY.startNm + i * MCCREE_1972_RQY.stepNm);
 

@@ -19,8 +19,9 @@ export interface Spectrum {
 
 /** Largest gap between neighbouring wavelengths accepted, nm. */
 export const MAX_STEP_NM = 10;
-/** The span a spectrum must cover, nm (PAR). */
+/** A spectrum must start at or below this wavelength, nm (PAR). */
 export const REQUIRED_FROM_NM = 400;
+/** A spectrum must reach this wavelength or beyond, nm (PAR). */
 export const REQUIRED_TO_NM = 700;
 
 function checkWavelengths(lines: number[], nm: number[], problems: FileProblem[]): void {

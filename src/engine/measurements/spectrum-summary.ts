@@ -14,11 +14,13 @@ export const SPECTRUM_BANDS = {
   farRed: [700, 800],
 } as const satisfies Record<string, readonly [number, number]>;
 
-/** Red and far-red windows of the R:FR ratio, nm (Smith 1982). */
+/** Red window of the R:FR ratio, nm (Smith 1982). */
 export const RED_WINDOW_NM = [655, 665] as const;
+/** Far-red window of the R:FR ratio, nm (Smith 1982). */
 export const FAR_RED_WINDOW_NM = [725, 735] as const;
-/** The span the CIE 1931 chromaticity needs, nm. */
+/** The CIE 1931 chromaticity needs data from this wavelength or below, nm. */
 export const CHROMATICITY_FROM_NM = 380;
+/** The CIE 1931 chromaticity needs data up to this wavelength or beyond, nm. */
 export const CHROMATICITY_TO_NM = 780;
 
 /** The figures of a spectrum. */
