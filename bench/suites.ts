@@ -1,6 +1,7 @@
 import { engineSuite } from './engine';
 import { measurementsSuite } from './measurements';
+import { sensitivitySuite } from './sensitivity';
 import type { BenchSuite } from './types';
 
 /** Every benchmark section, in report order; `npm run bench -- <name>` runs only the named ones. */
-export const suites: BenchSuite[] = [engineSuite, measurementsSuite];
+export const suites: BenchSuite[] = [engineSuite, measurementsSuite, sensitivitySuite];

@@ -89,3 +89,16 @@ export function withPriceAndFactor(s: Scenario, price: number, index: number, fa
 
 /** |a − b| / max(|a|, |b|, 1) */
 export const relDiff = (a: number, b: number): number => Math.abs(a - b) / Math.max(Math.abs(a), Math.abs(b), 1);
+
+/** The scenario with one field (by Problem-style path) replaced, copying only along the path. */
+export function pathKeysForTest<T>(root: T, path: string, value: unknown): T {
+  const keys = (path.match(/[^.[\]]+/g) ?? []).map((k) => (/^\d+$/.test(k) ? Number(k) : k));
+  const put = (node: unknown, at: number): unknown => {
+    if (at === keys.length) return value;
+    const k = keys[at]!;
+    if (Array.isArray(node)) return node.map((x, i) => (i === k ? put(x, at + 1) : x));
+    const rec = node as Record<string, unknown>;
+    return { ...rec, [k]: put(rec[k], at + 1) };
+  };
+  return put(root, 0) as T;
+}

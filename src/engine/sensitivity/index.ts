@@ -10,7 +10,7 @@ export type { SwingPlan, SwingResult, SwingRow } from './swings';
 export { BREAKEVEN_FORMAT, breakevenDocument, breakevenEfficacy, breakevenPrice } from './breakeven';
 export type { EfficacyBreakeven, NoBreakevenReason, PriceBreakeven } from './breakeven';
 export { planUncertainty, runUncertainty, summarizeUncertainty, uncertaintyDraws } from './uncertainty';
-export type { UncertaintyChunk, UncertaintyOption, UncertaintyPlan, UncertaintySummary } from './uncertainty';
+export type { DrawRoute, UncertaintyChunk, UncertaintyOption, UncertaintyPlan, UncertaintySummary } from './uncertainty';
 export { checkOptionId, checkSweepSettings, checkUncertaintySettings, maxEfficacyFactor, optionIndexOf } from './checks';
 export { clampToBounds, numericInputs, withinBounds } from './inputs';
 export type { InputBounds, NumericInput } from './inputs';

@@ -50,7 +50,7 @@ export interface SweepRows {
 export function axisValues(a: SweepAxis): number[] {
   if (a.n === 1) return [a.lo];
   const gaps = a.n - 1;
-  return Array.from({ length: a.n }, (_, i) => (a.lo * (gaps - i) + a.hi * i) / gaps);
+  return Array.from({ length: a.n }, (_, i) => (i === gaps ? a.hi : (a.lo * (gaps - i) + a.hi * i) / gaps));
 }
 
 /** Compiles a validated scenario and checked settings (see checkSweepSettings) into a sweep plan. */

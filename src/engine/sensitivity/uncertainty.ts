@@ -9,6 +9,7 @@ import { triangularQuantile } from './triangular';
 
 const PRICE_PATH = 'electricity.pricePerKwh';
 
+
 /** An uncertainty run prepared for chunked evaluation: plain data, so it can cross to a worker. */
 export interface UncertaintyPlan {
   scenario: Scenario;
@@ -16,10 +17,14 @@ export interface UncertaintyPlan {
   ids: string[];
   /** field path keys of each drawn input */
   keys: (string | number)[][];
-  /** position of the electricity price among the inputs, or −1; it is passed to the fast path directly */
-  priceInput: number;
-  /** the compiled scenario when the price is the only input drawn, else null (each draw compiles its own) */
-  fixedFast: FastScenario | null;
+  /** how each drawn input reaches the fast path */
+  routes: DrawRoute[];
+  /** the scenario compiled as entered */
+  baseFast: FastScenario;
+  /** true when a drawn input changes the scenario-wide figures of the fast path (rates, area, target, cooling…) */
+  scenarioDrawn: boolean;
+  /** indices of options whose compiled figures a drawn input changes (all of them for utilization or the schedule) */
+  optionsDrawn: number[];
 }
 
 /** Draws from..to−1 of a run. */
@@ -53,17 +58,70 @@ export interface UncertaintySummary {
   options: UncertaintyOption[];
 }
 
+/**
+ * How a drawn input reaches the fast path. The price is fastPresentValue's price argument. An
+ * option's photonEfficacy or ppf, and utilization, scale the photons each fixture puts on the canopy
+ * (Φ × U × M), which is exactly what fastPresentValue's efficacy factor multiplies, so they become
+ * a factor of drawn / entered value. Every other input is written into the scenario, which is
+ * compiled again (see compileDraw).
+ */
+export type DrawRoute =
+  | { kind: 'price' }
+  | { kind: 'factor'; option: number; entered: number }
+  | { kind: 'factor-all'; entered: number }
+  | { kind: 'field' };
+
+function routeOf(s: Scenario, path: string): DrawRoute {
+  if (path === PRICE_PATH) return { kind: 'price' };
+  if (path === 'utilization') return { kind: 'factor-all', entered: s.utilization };
+  const m = /^options\[(\d+)\]\.(photonEfficacy|ppf)$/.exec(path);
+  const o = m ? s.options[Number(m[1])] : undefined;
+  const entered = m && o ? (m[2] === 'ppf' ? o.ppf : o.photonEfficacy) : undefined;
+  return m && entered !== undefined ? { kind: 'factor', option: Number(m[1]), entered } : { kind: 'field' };
+}
+
 /** Prepares an uncertainty run from a validated scenario and settings checked by checkUncertaintySettings. */
 export function planUncertainty(s: Scenario, settings: UncertaintySettings): UncertaintyPlan {
-  const priceInput = settings.inputs.findIndex((r) => r.path === PRICE_PATH);
+  const routes = settings.inputs.map((r) => routeOf(s, r.path));
+  const drawnOptions = new Set<number>();
+  let scenarioDrawn = false;
+  settings.inputs.forEach((r, j) => {
+    if (routes[j]!.kind !== 'field') return;
+    const option = /^options\[(\d+)\]/.exec(r.path);
+    if (option) drawnOptions.add(Number(option[1]));
+    else if (r.path.startsWith('schedule')) {
+      scenarioDrawn = true;
+      s.options.forEach((_, i) => drawnOptions.add(i));
+    } else scenarioDrawn = true;
+  });
   return {
     scenario: s,
     settings,
     ids: s.options.map((o) => o.id),
     keys: settings.inputs.map((r) => pathKeys(r.path)),
-    priceInput,
-    fixedFast: settings.inputs.length === 1 && priceInput === 0 ? compileFast(s) : null,
+    routes,
+    baseFast: compileFast(s),
+    scenarioDrawn,
+    optionsDrawn: [...drawnOptions].sort((a, b) => a - b),
   };
+}
+
+/**
+ * The fast path for one drawn scenario, through compileFast only: it compiles the drawn scenario
+ * restricted to the options a drawn input touches and keeps the other options as compiled from the
+ * scenario as entered. A compiled option depends only on its own fields, utilization, leveling
+ * basis, lit hours and horizon, so the ones kept are exactly what a full compile would give.
+ */
+function compileDraw(plan: UncertaintyPlan, drawn: Scenario): FastScenario {
+  const { baseFast, scenarioDrawn, optionsDrawn } = plan;
+  if (!scenarioDrawn && optionsDrawn.length === 0) return baseFast;
+  if (optionsDrawn.length === baseFast.options.length) return compileFast(drawn);
+  const part = compileFast({ ...drawn, options: optionsDrawn.map((i) => drawn.options[i]!) });
+  const options = baseFast.options.slice();
+  optionsDrawn.forEach((i, k) => {
+    options[i] = part.options[k]!;
+  });
+  return { ...(scenarioDrawn ? part : baseFast), options };
 }
 
 /**
@@ -71,10 +129,10 @@ export function planUncertainty(s: Scenario, settings: UncertaintySettings): Unc
  * inputs), one per input in the order given, so any split into chunks gives the same numbers. Each
  * value comes from the triangular distribution (low, likely, high); money fields are set as numbers,
  * which the fast path reads the same way as decimal text. The draw is priced by compileFast and
- * fastPresentValue, the ledger's cash flows.
+ * fastPresentValue, the ledger's cash flows (see compileDraw).
  */
 export function uncertaintyDraws(plan: UncertaintyPlan, from: number, to: number): UncertaintyChunk {
-  const { scenario, settings, keys, priceInput, fixedFast, ids } = plan;
+  const { scenario, settings, keys, routes, ids } = plan;
   const last = Math.min(to, settings.draws);
   const count = Math.max(0, last - from);
   const inputs = settings.inputs;
@@ -83,20 +141,25 @@ export function uncertaintyDraws(plan: UncertaintyPlan, from: number, to: number
   const presentValue = ids.map(() => new Float64Array(count));
   const cheapestCount = ids.map(() => 0);
   const basePrice = Number(scenario.electricity.pricePerKwh);
+  const factors = new Float64Array(ids.length);
   for (let k = 0; k < count; k++) {
     let s = scenario;
     let price = basePrice;
+    factors.fill(1);
     for (let j = 0; j < inputs.length; j++) {
       const r = inputs[j]!;
       const v = triangularQuantile(unitInterval(xoshiro128ssNext(state)), r.low, r.likely, r.high);
-      if (j === priceInput) price = v;
+      const route = routes[j]!;
+      if (route.kind === 'price') price = v;
+      else if (route.kind === 'factor') factors[route.option]! *= v / route.entered;
+      else if (route.kind === 'factor-all') for (let i = 0; i < ids.length; i++) factors[i]! *= v / route.entered;
       else s = setAt(s, keys[j]!, v);
     }
-    const fs = fixedFast ?? compileFast(s);
+    const fs = compileDraw(plan, s);
     let best = 0;
     let bestPv = Infinity;
     for (let i = 0; i < ids.length; i++) {
-      const pv = fastPresentValue(fs, i, price);
+      const pv = fastPresentValue(fs, i, price, factors[i]);
       presentValue[i]![k] = pv;
       if (pv < bestPv) {
         bestPv = pv;
