@@ -37,7 +37,7 @@ export const measurementsSuite: BenchSuite = {
     const readG = () => {
       if (!readPpfdGrid(grid).ok) throw new Error('bench grid refused');
     };
-    // the first call also builds the 1 % Planckian table of the CCT search, once per process
+    // the first call also builds the Planckian table of the CCT search, once per process
     const coldStart = performance.now();
     readS();
     const coldMs = performance.now() - coldStart;

@@ -41,11 +41,11 @@ interface Row {
 
 let coarse: { t: number; u: number; v: number }[] | null = null;
 
-/** Ohno's first table: 1 % steps over 1000–20000 K, built once on first use. */
+/** The first table: 5 % steps over 1000–20000 K, built once on first use; the cascade refines it. */
 function coarseTable() {
   if (!coarse) {
     coarse = [];
-    for (let t = CCT_MIN_K; t <= CCT_MAX_K * 1.0001; t *= 1.01) {
+    for (let t = CCT_MIN_K; t <= CCT_MAX_K * 1.0001; t *= 1.05) {
       const [u, v] = planckianUv(t);
       coarse.push({ t, u, v });
     }
@@ -82,8 +82,9 @@ function parabolic(v: number, [p, m, n]: Row[]): Cct {
 
 /**
  * Correlated colour temperature of a CIE 1960 (u, v) chromaticity by Ohno (2014), "Practical use
- * and calculation of CCT and Duv", LEUKOS 10(1): 47–55: the nearest point of a 1 % Planckian table,
- * refined by a cascade of finer tables (Ohno's cascade expansion), then the triangular solution
+ * and calculation of CCT and Duv", LEUKOS 10(1): 47–55: the nearest point of a 5 % Planckian table,
+ * refined by four cascades of finer tables (Ohno's cascade expansion; steps of 0.0016 % at the end,
+ * 0.03 K at 2000 K), then the triangular solution
  * near the locus (|Duv| < 0.002) and the parabolic one farther off. Holds from 1000 to 20000 K,
  * sodium-lamp temperatures included.
  * @returns CCT in K and Duv, or null outside 1000–20000 K or with |Duv| > 0.05
@@ -93,7 +94,7 @@ export function cctFromUv(u: number, v: number): Cct | null {
   let i = nearest(table);
   if (i === 0 || i === table.length - 1) return null;
   let rows = table.slice(i - 1, i + 2);
-  for (let pass = 0; pass < 3; pass++) {
+  for (let pass = 0; pass < 4; pass++) {
     const lo = rows[0]!.t;
     const ratio = (rows[2]!.t / lo) ** (1 / 10);
     const fine = Array.from({ length: 11 }, (_, k) => {
