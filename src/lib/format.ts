@@ -1,4 +1,4 @@
-import { roundForDisplay } from '../engine/money';
+import { minorUnitDigits, roundForDisplay } from '../engine/money';
 
 const numberFormats = new Map<string, Intl.NumberFormat>();
 function nf(key: string, make: () => Intl.NumberFormat): Intl.NumberFormat {
@@ -16,7 +16,7 @@ function nf(key: string, make: () => Intl.NumberFormat): Intl.NumberFormat {
  */
 export function formatMoney(amount: string, currency: string, locale?: string): string {
   const rounded = roundForDisplay(amount, currency);
-  const digits = rounded.decimalPlaces();
+  const digits = minorUnitDigits(currency);
   const f = nf(`money|${currency}|${locale ?? ''}|${digits}`, () =>
     new Intl.NumberFormat(locale, { style: 'currency', currency, minimumFractionDigits: digits, maximumFractionDigits: digits }),
   );

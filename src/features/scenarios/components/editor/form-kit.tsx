@@ -11,6 +11,13 @@ export function toNumber(v: unknown): number | undefined {
   return Number(v.trim().replace(',', '.'));
 }
 
+/** Text → amount for the form: empty is "not given" (undefined); a comma works as a decimal point. */
+export function toMoneyText(v: unknown): unknown {
+  if (typeof v !== 'string') return v;
+  const t = v.trim().replace(',', '.');
+  return t === '' ? undefined : t;
+}
+
 /** The error message at a field path, written as a sentence with the field's label. */
 export function useFieldError(name: string, label: string): string | undefined {
   const { errors } = useFormState<ScenarioInput>();
@@ -44,7 +51,7 @@ export function MoneyField({ name, label, unit, hint, className }: BaseProps) {
   const error = useFieldError(name, label);
   return (
     <Field label={label} unit={unit} hint={hint} error={error} className={className}>
-      <Input inputMode="decimal" autoComplete="off" className="figure" {...register(name as never, { setValueAs: (v: unknown) => (typeof v === 'string' ? v.trim().replace(',', '.') : v) })} />
+      <Input inputMode="decimal" autoComplete="off" className="figure" {...register(name as never, { setValueAs: toMoneyText })} />
     </Field>
   );
 }

@@ -2,14 +2,14 @@ import { useFormContext, useWatch } from 'react-hook-form';
 import type { OptionInput, ScenarioInput } from '../../../../contracts/scenario';
 import { Badge } from '../../../../components/ui/badge';
 import { Button } from '../../../../components/ui/button';
-import { TECHNOLOGY_NAMES } from '../../../../components/technology';
+import { TECHNOLOGY_SHORT } from '../../../../components/technology';
 import { Field } from '../../../../components/ui/field';
 import { Select } from '../../../../components/ui/input';
 import { MoneyField, NumberField, SelectField, TextField } from './form-kit';
 import type { LibraryEntry } from './library-entry';
 import { overriddenFields } from './library-entry';
 
-const TECH_OPTIONS = Object.entries(TECHNOLOGY_NAMES).map(([value, label]) => ({ value, label }));
+const TECH_OPTIONS = Object.entries(TECHNOLOGY_SHORT).map(([value, label]) => ({ value, label: label === 'Fluor.' ? 'Fluorescent' : label }));
 
 /** One option of the scenario: its fixture and lamp figures, prices, and what differs from its library entry. */
 export function OptionCard({ index, currency, canEdit, canRemove, onRemove, entry }: {
@@ -55,8 +55,8 @@ export function OptionCard({ index, currency, canEdit, canRemove, onRemove, entr
         <NumberField name={`${base}.wallWatts`} label="Wall power" unit="W" hint="Ballast or driver included." />
         <Field label="Light output given as">
           <Select value={outputBy} onChange={(e) => switchOutput(e.target.value)} disabled={!canEdit}>
-            <option value="efficacy">efficacy, µmol/J</option>
-            <option value="ppf">PPF, µmol/s</option>
+            <option value="efficacy">efficacy</option>
+            <option value="ppf">PPF</option>
           </Select>
         </Field>
         {outputBy === 'efficacy' ? (

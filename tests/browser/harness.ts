@@ -1,0 +1,117 @@
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
+import { boot } from '../../server/boot';
+import type { Running } from '../../server/boot';
+import { buildClientIfNeeded } from '../../server/build-client';
+import { readConfig } from '../../server/config';
+import { createLogger } from '../../server/logger';
+
+/** Debian's chromium, driven by playwright-core; never a downloaded browser. */
+export const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+const CHROMIUM_ARGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+export const SCREENSHOT_DIR = join(process.cwd(), 'test-results', 'screenshots');
+
+/** A running server on a temporary SQLite file, and browser sessions against it. */
+export interface Harness {
+  baseUrl: string;
+  running: Running;
+  /** a fresh browser profile (its own cookies), at a laptop-sized window */
+  session(viewport?: { width: number; height: number }): Promise<Session>;
+  close(): Promise<void>;
+}
+
+export interface Session {
+  context: BrowserContext;
+  page: Page;
+  /** console errors and failed page scripts seen so far */
+  errors: string[];
+  screenshot(name: string): Promise<string>;
+  close(): Promise<void>;
+}
+
+/**
+ * Builds the client when dist/ is missing or stale, boots the real server (server/boot.ts) on a free
+ * port with a temporary database, and hands out isolated browser sessions.
+ */
+export async function startHarness(env: Record<string, string> = {}): Promise<Harness> {
+  const root = process.cwd();
+  await buildClientIfNeeded(root);
+  const dir = mkdtempSync(join(tmpdir(), 'photon-parity-browser-'));
+  const config = readConfig({ NODE_ENV: 'test', PORT: '0', HOST: '127.0.0.1', DATABASE_PATH: join(dir, 'test.sqlite'), ...env });
+  const running = await boot(config, createLogger('silent'), root);
+  const baseUrl = `http://127.0.0.1:${running.port}`;
+  mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  const sessions = new Set<Session>();
+
+  const session = async (viewport = { width: 1366, height: 900 }): Promise<Session> => {
+    const profile = mkdtempSync(join(dir, 'profile-'));
+    const context = await chromium.launchPersistentContext(profile, {
+      executablePath: CHROMIUM,
+      headless: true,
+      args: CHROMIUM_ARGS,
+      viewport,
+      baseURL: baseUrl,
+      locale: 'en-GB',
+      timezoneId: 'UTC',
+    });
+    const page = context.pages()[0] ?? (await context.newPage());
+    const errors: string[] = [];
+    page.on('console', (m) => {
+      if (m.type() === 'error') errors.push(m.text());
+    });
+    page.on('pageerror', (e) => errors.push(e.message));
+    page.on('response', (r) => {
+      if (r.status() >= 400) errors.push(`${r.status()} ${r.request().method()} ${new URL(r.url()).pathname}`);
+    });
+    const s: Session = {
+      context,
+      page,
+      errors,
+      screenshot: async (name) => {
+        const path = join(SCREENSHOT_DIR, `${name}.png`);
+        await page.screenshot({ path, fullPage: true });
+        return path;
+      },
+      close: async () => {
+        sessions.delete(s);
+        await context.close();
+      },
+    };
+    sessions.add(s);
+    return s;
+  };
+
+  return {
+    baseUrl,
+    running,
+    session,
+    close: async () => {
+      for (const s of [...sessions]) await s.close();
+      await running.close();
+      rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+/** Waits for a locator to be visible and reports whether it is (vitest has no web-first assertions). */
+export async function shown(locator: import('playwright-core').Locator, timeout = 10_000): Promise<boolean> {
+  try {
+    await locator.first().waitFor({ state: 'visible', timeout });
+    return true;
+  } catch {
+    return false;
+  }
+}
