@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs';
+import { gzipSync } from 'node:zlib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { computeScenario, parseScenario } from '../../src/engine';
 import { shown, startHarness } from './harness';
@@ -45,6 +46,25 @@ describe('the start page', () => {
     await s.page.locator('.recharts-surface').first().waitFor();
     await s.screenshot('02-start-page-charts');
     expect(s.errors, s.errors.join("\n")).toEqual([]);
+    await s.close();
+  });
+
+  it('ships under 250 KB of gzipped JavaScript on the first load, with the chart code left for later', async () => {
+    const s = await h.session();
+    const scripts: Array<{ path: string; gz: number }> = [];
+    s.page.on('response', async (r) => {
+      const path = new URL(r.url()).pathname;
+      if (!path.endsWith('.js')) return;
+      const body = await r.body().catch(() => Buffer.alloc(0));
+      scripts.push({ path, gz: gzipSync(body, { level: 9 }).length });
+    });
+    await s.page.goto('/');
+    await s.page.getByRole('table', { name: /leveled options/i }).waitFor();
+    await s.page.waitForLoadState('networkidle');
+    const total = scripts.reduce((sum, x) => sum + x.gz, 0);
+    console.info(`first load: ${scripts.length} scripts, ${(total / 1024).toFixed(1)} KB gzipped`);
+    expect(total).toBeLessThan(250 * 1024);
+    expect(scripts.some((x) => /CartesianChart|cost-breakdown-chart|cumulative-chart/.test(x.path))).toBe(false);
     await s.close();
   });
 });

@@ -48,7 +48,14 @@ export interface Session {
  */
 export async function startHarness(env: Record<string, string> = {}): Promise<Harness> {
   const root = process.cwd();
-  await buildClientIfNeeded(root);
+  // Vitest sets NODE_ENV=test, which Vite would honour and bundle React's development build.
+  const nodeEnv = process.env.NODE_ENV;
+  process.env.NODE_ENV = 'production';
+  try {
+    await buildClientIfNeeded(root);
+  } finally {
+    process.env.NODE_ENV = nodeEnv;
+  }
   const dir = mkdtempSync(join(tmpdir(), 'photon-parity-browser-'));
   const config = readConfig({ NODE_ENV: 'test', PORT: '0', HOST: '127.0.0.1', DATABASE_PATH: join(dir, 'test.sqlite'), ...env });
   const running = await boot(config, createLogger('silent'), root);
