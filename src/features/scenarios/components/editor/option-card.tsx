@@ -48,9 +48,9 @@ export function OptionCard({ index, currency, canEdit, canRemove, onRemove, entr
         {overrides.length > 0 ? <Badge tone="gold" title="These figures differ from the library entry in this scenario only">changed here: {overrides.join(', ')}</Badge> : null}
         {canEdit && canRemove ? <Button size="sm" tone="quiet" className="ml-auto" onClick={onRemove}>Remove option</Button> : null}
       </div>
-      <div className="grid grid-cols-2 gap-3 md:grid-cols-3">
+      <div className="grid grid-cols-2 gap-3">
         <TextField name={`${base}.label`} label="Name" className="col-span-2" />
-        <TextField name={`${base}.id`} label="Short id" hint="a–z, 0–9 and hyphens" />
+        <TextField name={`${base}.id`} label="Short id" hint="a–z, 0–9 and hyphens" className="col-span-2" />
         <SelectField name={`${base}.technology`} label="Technology" options={TECH_OPTIONS} />
         <NumberField name={`${base}.wallWatts`} label="Wall power" unit="W" hint="Ballast or driver included." />
         <Field label="Light output given as">
@@ -64,7 +64,7 @@ export function OptionCard({ index, currency, canEdit, canRemove, onRemove, entr
         ) : (
           <NumberField name={`${base}.ppf`} label="PPF" unit="µmol/s" />
         )}
-        <label className="col-span-2 flex items-center gap-2 self-end text-sm md:col-span-1">
+        <label className="col-span-2 flex items-center gap-2 text-sm">
           <input type="checkbox" disabled={!canEdit} checked={Boolean(option.owned)} onChange={(e) => set(`${base}.owned`, e.target.checked)} />
           Already installed (owned: no purchase)
         </label>
@@ -72,8 +72,8 @@ export function OptionCard({ index, currency, canEdit, canRemove, onRemove, entr
         <MoneyField name={`${base}.installPrice`} label="Installation" unit={currency} hint="Per fixture." />
         <MoneyField name={`${base}.rebate`} label="Rebate" unit={currency} hint="Per fixture, at the start." />
       </div>
-      <div className="mt-3 grid grid-cols-2 gap-3 md:grid-cols-3">
-        <label className="col-span-2 flex items-center gap-2 text-sm md:col-span-3">
+      <div className="mt-3 grid grid-cols-2 gap-3">
+        <label className="col-span-2 flex items-center gap-2 text-sm">
           <input
             type="checkbox"
             disabled={!canEdit}

@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useCallback, useEffect, useState } from 'react';
-import { FormProvider, useForm } from 'react-hook-form';
+import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import type { Path } from 'react-hook-form';
 import type { ScenarioRecord } from '../../../../contracts/api/scenarios';
 import { scenarioSchema } from '../../../../contracts/scenario';
@@ -41,6 +41,7 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
     defaultValues: structuredClone(record.document) as ScenarioInput,
   });
   const history = useUndoableForm(form);
+  const currency = useWatch({ control: form.control, name: 'currency' });
   const update = useUpdateScenario();
   const [revision, setRevision] = useState(record.revision);
   const [saved, setSaved] = useState(() => snapshot(form.getValues()));
@@ -114,7 +115,7 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
         {update.isError && !conflict ? <Notice tone="error" className="mt-2">Not saved: {errorMessage(update.error)} Your changes are still here.</Notice> : null}
         {invalidOnSave ? <Notice tone="error" className="mt-2">Not saved: some fields need attention; each one says what is wrong beside it.</Notice> : null}
       </div>
-      <div className="grid items-start gap-4 lg:grid-cols-[minmax(22rem,30rem)_1fr]">
+      <div className="grid items-start gap-4 lg:grid-cols-[minmax(20rem,27rem)_minmax(0,1fr)]">
         <form noValidate onSubmit={(e) => e.preventDefault()} aria-label="Scenario inputs">
           <fieldset disabled={!scope.canEdit} className="space-y-3">
             <legend className="sr-only">Scenario inputs</legend>
@@ -124,11 +125,13 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
             </Group>
             <RoomSection unitSystem={scope.unitSystem} />
             <ScheduleSection canEdit={scope.canEdit} />
-            <CostsSection currency={form.getValues('currency')} canEdit={scope.canEdit} />
-            <OptionsSection currency={form.getValues('currency')} canEdit={scope.canEdit} library={library} />
+            <CostsSection currency={currency} canEdit={scope.canEdit} />
+            <OptionsSection currency={currency} canEdit={scope.canEdit} library={library} />
           </fieldset>
         </form>
-        <LiveResults form={form as never} unitSystem={scope.unitSystem} />
+        <div className="min-w-0">
+          <LiveResults form={form as never} unitSystem={scope.unitSystem} />
+        </div>
       </div>
     </FormProvider>
   );

@@ -1,0 +1,182 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { listCaughtMail } from '../../server/repos/mail';
+import { models } from '../../server/db/models';
+import { shown, startHarness } from './harness';
+import type { Harness, Session } from './harness';
+
+// One story, step by step, against the real server: the steps share a browser session and data.
+let h: Harness;
+let owner: Session;
+let scenarioUrl = '';
+const ownerEmail = 'owner@grower.invalid';
+const viewerEmail = 'viewer@grower.invalid';
+const password = 'correct-horse-battery';
+
+beforeAll(async () => {
+  h = await startHarness();
+  owner = await h.session();
+});
+afterAll(async () => {
+  await h?.close();
+});
+
+async function signUp(s: Session, name: string, email: string, next?: string) {
+  await s.page.goto(next ? `/sign-up?next=${encodeURIComponent(next)}` : '/sign-up');
+  await s.page.getByLabel('Your name').fill(name);
+  await s.page.getByLabel('E-mail address').fill(email);
+  await s.page.getByLabel('Password').fill(password);
+  await s.page.getByRole('button', { name: 'Create the account' }).click();
+}
+
+/** The option row of the results table that carries the "lowest present value" mark. */
+async function cheapestRow(s: Session): Promise<string | null> {
+  const row = s.page.locator('tr[data-option]', { hasText: 'lowest present value' });
+  await row.first().waitFor();
+  return row.first().getAttribute('data-option');
+}
+
+describe('the workbench in a browser', () => {
+  it('signs up, signs out and signs in again through the pages', async () => {
+    await signUp(owner, 'Olive Owner', ownerEmail);
+    expect(await shown(owner.page.getByText('You are not in any workspace yet'))).toBe(true);
+    await owner.screenshot('10-workspaces-empty');
+    await owner.page.getByRole('button', { name: 'Sign out' }).click();
+    expect(await shown(owner.page.getByRole('link', { name: 'Sign in' }).first())).toBe(true);
+
+    await owner.page.goto('/sign-in');
+    await owner.page.getByLabel('E-mail address').fill(ownerEmail);
+    await owner.page.getByLabel('Password').fill('wrong password here');
+    await owner.page.getByRole('button', { name: 'Sign in', exact: true }).click();
+    expect(await shown(owner.page.getByText('do not match an account'))).toBe(true);
+    expect(await owner.page.getByLabel('E-mail address').inputValue()).toBe(ownerEmail);
+    await owner.screenshot('11-sign-in-refused');
+    await owner.page.getByLabel('Password').fill(password);
+    await owner.page.getByRole('button', { name: 'Sign in', exact: true }).click();
+    expect(await shown(owner.page.getByText('Signed in as'))).toBe(true);
+  });
+
+  it('builds a scenario from an empty workspace with fixtures from the library', async () => {
+    const p = owner.page;
+    await p.goto('/workspaces');
+    await p.getByLabel('Name').fill('Test greenhouse');
+    await p.getByRole('button', { name: 'Create the workspace' }).click();
+    expect(await shown(p.getByText('No scenarios yet'))).toBe(true);
+    await owner.screenshot('12-scenarios-empty');
+
+    await p.getByRole('link', { name: 'Fixture library' }).click();
+    expect(await shown(p.getByText('The library is empty'))).toBe(true);
+    await owner.screenshot('13-library-empty');
+
+    const header = 'key,label,technology,wallWatts,photonEfficacy,fixturePrice,dataSource';
+    await p.getByLabel('Or paste the CSV text').fill(`${header}\ntest-led,Test LED bar,led,600,2.8,1200,datasheet\ntest-hps,Test sodium,hps,-640,1.1,150,estimate\n`);
+    await p.getByRole('button', { name: 'Import', exact: true }).click();
+    const badLine = p.getByRole('list', { name: 'The CSV lines with their problems' }).locator('li', { hasText: 'line 3, wallWatts' });
+    expect(await shown(badLine)).toBe(true);
+    expect(await badLine.locator('span').first().innerText()).toBe('3');
+    await owner.screenshot('14-library-import-errors');
+
+    await p.getByLabel('Or paste the CSV text').fill(`${header}\ntest-led,Test LED bar,led,600,2.8,1200,datasheet\ntest-hps,Test sodium,hps,640,1.1,150,estimate\n`);
+    await p.getByRole('button', { name: 'Import', exact: true }).click();
+    expect(await shown(p.getByText('Imported: 2 added, 0 updated.'))).toBe(true);
+    expect(await shown(p.locator('tr[data-fixture="test-hps"]').getByText('estimate'))).toBe(true);
+    await p.getByRole('button', { name: 'Edit Wall power of Test sodium' }).click();
+    await p.getByLabel('Wall power of Test sodium').fill('645');
+    await p.getByLabel('Wall power of Test sodium').press('Enter');
+    expect(await shown(p.locator('tr[data-fixture="test-hps"]').getByText('645'))).toBe(true);
+    await owner.screenshot('15-library');
+
+    await p.getByRole('link', { name: 'Scenarios' }).click();
+    await p.getByRole('button', { name: 'Start a new scenario' }).click();
+    await p.getByLabel('Add from the fixture library').selectOption({ label: 'Test LED bar (datasheet)' });
+    await p.getByRole('button', { name: 'Add this fixture' }).click();
+    await p.getByLabel('Add from the fixture library').selectOption({ label: 'Test sodium (estimate)' });
+    await p.getByRole('button', { name: 'Add this fixture' }).click();
+    await p.getByRole('article', { name: /^Option 1:/ }).getByRole('button', { name: 'Remove option' }).click();
+    await p.getByLabel('Title', { exact: true }).fill('Test room, LED or sodium');
+    expect(await cheapestRow(owner)).toBe('test-led');
+    await p.getByRole('button', { name: 'Save as revision 2' }).click();
+    expect(await shown(p.getByText('Revision 2'))).toBe(true);
+    scenarioUrl = new URL(p.url()).pathname;
+    await owner.screenshot('16-editor');
+  });
+
+  it('moves the cheapest option when the electricity price changes, and undo and redo bring it back', async () => {
+    const p = owner.page;
+    const price = p.getByLabel('Price', { exact: true });
+    expect(await price.inputValue()).toBe('0.2');
+    expect(await cheapestRow(owner)).toBe('test-led');
+    await price.fill('0.02');
+    await p.locator('tr[data-option="test-hps"]', { hasText: 'lowest present value' }).waitFor();
+    expect(await cheapestRow(owner)).toBe('test-hps');
+    await owner.screenshot('17-editor-cheap-power');
+
+    await p.getByRole('button', { name: 'Undo' }).click();
+    expect(await price.inputValue()).toBe('0.2');
+    await p.locator('tr[data-option="test-led"]', { hasText: 'lowest present value' }).waitFor();
+    expect(await cheapestRow(owner)).toBe('test-led');
+
+    await p.getByRole('button', { name: 'Redo' }).click();
+    expect(await price.inputValue()).toBe('0.02');
+    await p.locator('tr[data-option="test-hps"]', { hasText: 'lowest present value' }).waitFor();
+
+    await price.fill('');
+    expect(await shown(p.getByText('Price is required.'))).toBe(true);
+    await p.keyboard.press('Control+z');
+    expect(await price.inputValue()).toBe('0.02');
+    await p.getByRole('button', { name: 'Save as revision 3' }).click();
+    expect(await shown(p.getByText('Revision 3'))).toBe(true);
+    expect(owner.errors.filter((e) => !e.startsWith('4'))).toEqual([]);
+  });
+
+  it('shows the revision history', async () => {
+    await owner.page.goto(`${scenarioUrl}/history`);
+    expect(await shown(owner.page.getByText('Revision 3', { exact: true }))).toBe(true);
+    expect(await shown(owner.page.getByText('electricity.pricePerKwh'))).toBe(true);
+    await owner.page.getByRole('button', { name: 'Show' }).nth(1).click();
+    expect(await shown(owner.page.getByText('"title": "Test room, LED or sodium"'))).toBe(true);
+    await owner.screenshot('18-history');
+  });
+
+  it('lets an owner invite a viewer, who sees no edit controls and whose write the API refuses', async () => {
+    const p = owner.page;
+    await p.getByRole('link', { name: 'Members and settings' }).click();
+    await p.getByLabel('E-mail address').fill(viewerEmail);
+    await p.getByLabel('Role', { exact: true }).selectOption('viewer');
+    await p.getByRole('button', { name: 'Send the invitation' }).click();
+    expect(await shown(p.getByText(`Invitation sent to ${viewerEmail}`))).toBe(true);
+    await owner.screenshot('19-settings');
+
+    const mail = (await listCaughtMail(models(h.running.sequelize))).find((m) => m.to.includes(viewerEmail));
+    const link = /\/invitations\/[A-Za-z0-9_-]{43}/.exec(mail?.text ?? '')?.[0];
+    expect(link).toBeDefined();
+
+    const viewer = await h.session({ width: 1024, height: 768 });
+    await signUp(viewer, 'Vera Viewer', viewerEmail, link);
+    await viewer.page.getByRole('button', { name: 'Accept and open the workspace' }).click();
+    await viewer.page.getByRole('link', { name: 'Test room, LED or sodium' }).click();
+    await viewer.page.getByRole('table', { name: /leveled options/i }).waitFor();
+    expect(await viewer.page.getByRole('button', { name: /Save/ }).count()).toBe(0);
+    expect(await viewer.page.getByRole('button', { name: 'Undo' }).count()).toBe(0);
+    expect(await viewer.page.getByRole('button', { name: 'Remove option' }).count()).toBe(0);
+    expect(await viewer.page.getByLabel('Price', { exact: true }).isDisabled()).toBe(true);
+    await viewer.screenshot('20-editor-viewer-tablet');
+
+    const status = await viewer.page.evaluate(async (path) => {
+      const api = `/api${path.replace(/^\/w\//, '/workspaces/')}`;
+      const me = (await (await fetch('/api/me')).json()) as { csrfToken: string };
+      const current = (await (await fetch(api)).json()) as { scenario: { document: unknown; revision: number } };
+      const res = await fetch(api, {
+        method: 'PUT',
+        headers: { 'content-type': 'application/json', 'x-csrf-token': me.csrfToken, 'if-match': String(current.scenario.revision) },
+        body: JSON.stringify({ document: current.scenario.document }),
+      });
+      return { status: res.status, code: ((await res.json()) as { error?: { code?: string } }).error?.code };
+    }, scenarioUrl);
+    expect(status).toEqual({ status: 403, code: 'forbidden' });
+
+    await viewer.page.goto(scenarioUrl.replace(/\/scenarios\/.*$/, '/fixtures'));
+    await viewer.page.locator('tr[data-fixture="test-led"]').waitFor();
+    expect(await viewer.page.getByRole('button', { name: /^Edit / }).count()).toBe(0);
+    await viewer.screenshot('21-library-viewer-tablet');
+  });
+});
