@@ -21,8 +21,11 @@ export default function ScenarioEditorPage() {
     () => fixtures.data?.fixtures.map((f) => ({ key: f.key, label: f.label, dataSource: f.dataSource, option: optionFromFixture(f) })),
     [fixtures.data],
   );
-  if (scenario.isPending) return <LoadingState what="Opening the scenario" />;
-  if (scenario.isError) return <ErrorState error={scenario.error} retry={() => void scenario.refetch()} />;
+  // Once loaded, the editor stays mounted whatever a later fetch does, so typed input is never lost.
+  if (!scenario.data) {
+    if (scenario.isError) return <ErrorState error={scenario.error} retry={() => void scenario.refetch()} />;
+    return <LoadingState what="Opening the scenario" />;
+  }
   const record = scenario.data.scenario;
   return (
     <div>

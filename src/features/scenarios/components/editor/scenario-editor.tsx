@@ -11,6 +11,7 @@ import type { WorkspaceScope } from '../../../../lib/workspace-context';
 import { useUpdateScenario } from '../../api/update-scenario';
 import { useUndoableForm } from '../../hooks/use-undoable-form';
 import { LiveResults } from '../live-results';
+import { LeaveGuard } from './leave-guard';
 import { ConflictNotice } from './conflict-notice';
 import { CostsSection } from './costs-section';
 import { EditorToolbar } from './editor-toolbar';
@@ -89,8 +90,16 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
     [form, record.id, revision, scope.canEdit, scope.workspaceId, update],
   );
 
+  const fetchLatest = async () => {
+    try {
+      return await onLoadLatest();
+    } catch (e) {
+      setConflict(`The newest revision could not be loaded: ${errorMessage(e)}`);
+      return undefined;
+    }
+  };
   const loadLatest = async () => {
-    const latest = await onLoadLatest();
+    const latest = await fetchLatest();
     if (!latest) return;
     history.restart(latest.document);
     setRevision(latest.revision);
@@ -99,7 +108,7 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
     setConflict(null);
   };
   const saveOver = async () => {
-    const latest = await onLoadLatest();
+    const latest = await fetchLatest();
     if (latest) save(latest.revision);
   };
 
@@ -111,6 +120,7 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
         ) : (
           <p className="text-sm text-ink-soft">You can read this scenario and try figures in the results; only editors and owners change it. Revision {revision}.</p>
         )}
+        {scope.canEdit ? <LeaveGuard dirty={dirty} /> : null}
         {conflict ? <ConflictNotice message={conflict} onLoadLatest={() => void loadLatest()} onSaveOver={() => void saveOver()} /> : null}
         {update.isError && !conflict ? <Notice tone="error" className="mt-2">Not saved: {errorMessage(update.error)} Your changes are still here.</Notice> : null}
         {invalidOnSave ? <Notice tone="error" className="mt-2">Not saved: some fields need attention; each one says what is wrong beside it.</Notice> : null}
