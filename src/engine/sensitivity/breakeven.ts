@@ -90,7 +90,8 @@ export interface EfficacyBreakeven {
  * multiplier (fewer fixtures give the same light), so the set where it is no dearer than the other
  * option is an interval reaching up to hi; bisection finds its lower end to 1e-14 relative. With
  * fixtureCount "whole" the count falls in steps and PV(vary) jumps at each step, so the two present
- * values may never be equal: the result is then the step at which vary becomes no dearer ("step").
+ * values may never be equal: the result is then the step at which vary becomes no dearer ("step"),
+ * placed 1e-12 relative above the step.
  */
 export function breakevenEfficacy(s: Scenario, settings: BreakevenEfficacySettings): EfficacyBreakeven {
   const iv = optionIndexOf(s, settings.vary);
@@ -104,9 +105,12 @@ export function breakevenEfficacy(s: Scenario, settings: BreakevenEfficacySettin
   const none = { vary: settings.vary, against: settings.against, factor: null, kind: null, gapAtFactor: null, searched: [lo, hi] as [number, number] };
   if (hi <= lo || gap(lo) <= 0 || gap(hi) > 0) return none;
   const [, above] = bisectBoundary((f) => gap(f) <= 0, lo, hi);
-  const g = gap(above);
   const scale = Math.max(Math.abs(other), 1);
-  return { ...none, factor: above, kind: Math.abs(g) <= 1e-9 * scale ? 'crossing' : 'step', gapAtFactor: g };
+  if (Math.abs(gap(above)) <= 1e-9 * scale) return { ...none, factor: above, kind: 'crossing', gapAtFactor: gap(above) };
+  // At a step, leveling by another route (the decimal ledger's) may round the count the other way
+  // within a few ulps of the step; 1e-12 above it, every route counts the smaller number of fixtures.
+  const factor = Math.min(hi, above * (1 + 1e-12));
+  return { ...none, factor, kind: 'step', gapAtFactor: gap(factor) };
 }
 
 /** The `photon-parity/breakeven@1` document for a price break-even. */

@@ -2,12 +2,12 @@ import type { Scenario } from '../../contracts/scenario';
 import type { UncertaintySettings } from '../../contracts/sensitivity';
 import { compileFast, fastPresentValue } from '../fast-path';
 import type { FastScenario } from '../fast-path';
+import { compileDraw, routeOf } from './draw-route';
+import type { DrawRoute } from './draw-route';
 import { pathKeys, setAt } from './inputs';
 import { seedXoshiro128, unitInterval, xoshiro128ssNext } from './prng';
 import { quantileSorted } from './quantile';
 import { triangularQuantile } from './triangular';
-
-const PRICE_PATH = 'electricity.pricePerKwh';
 
 
 /** An uncertainty run prepared for chunked evaluation: plain data, so it can cross to a worker. */
@@ -58,28 +58,6 @@ export interface UncertaintySummary {
   options: UncertaintyOption[];
 }
 
-/**
- * How a drawn input reaches the fast path. The price is fastPresentValue's price argument. An
- * option's photonEfficacy or ppf, and utilization, scale the photons each fixture puts on the canopy
- * (Φ × U × M), which is exactly what fastPresentValue's efficacy factor multiplies, so they become
- * a factor of drawn / entered value. Every other input is written into the scenario, which is
- * compiled again (see compileDraw).
- */
-export type DrawRoute =
-  | { kind: 'price' }
-  | { kind: 'factor'; option: number; entered: number }
-  | { kind: 'factor-all'; entered: number }
-  | { kind: 'field' };
-
-function routeOf(s: Scenario, path: string): DrawRoute {
-  if (path === PRICE_PATH) return { kind: 'price' };
-  if (path === 'utilization') return { kind: 'factor-all', entered: s.utilization };
-  const m = /^options\[(\d+)\]\.(photonEfficacy|ppf)$/.exec(path);
-  const o = m ? s.options[Number(m[1])] : undefined;
-  const entered = m && o ? (m[2] === 'ppf' ? o.ppf : o.photonEfficacy) : undefined;
-  return m && entered !== undefined ? { kind: 'factor', option: Number(m[1]), entered } : { kind: 'field' };
-}
-
 /** Prepares an uncertainty run from a validated scenario and settings checked by checkUncertaintySettings. */
 export function planUncertainty(s: Scenario, settings: UncertaintySettings): UncertaintyPlan {
   const routes = settings.inputs.map((r) => routeOf(s, r.path));
@@ -104,24 +82,6 @@ export function planUncertainty(s: Scenario, settings: UncertaintySettings): Unc
     scenarioDrawn,
     optionsDrawn: [...drawnOptions].sort((a, b) => a - b),
   };
-}
-
-/**
- * The fast path for one drawn scenario, through compileFast only: it compiles the drawn scenario
- * restricted to the options a drawn input touches and keeps the other options as compiled from the
- * scenario as entered. A compiled option depends only on its own fields, utilization, leveling
- * basis, lit hours and horizon, so the ones kept are exactly what a full compile would give.
- */
-function compileDraw(plan: UncertaintyPlan, drawn: Scenario): FastScenario {
-  const { baseFast, scenarioDrawn, optionsDrawn } = plan;
-  if (!scenarioDrawn && optionsDrawn.length === 0) return baseFast;
-  if (optionsDrawn.length === baseFast.options.length) return compileFast(drawn);
-  const part = compileFast({ ...drawn, options: optionsDrawn.map((i) => drawn.options[i]!) });
-  const options = baseFast.options.slice();
-  optionsDrawn.forEach((i, k) => {
-    options[i] = part.options[k]!;
-  });
-  return { ...(scenarioDrawn ? part : baseFast), options };
 }
 
 /**
