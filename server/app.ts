@@ -8,6 +8,12 @@ import type { Config } from './config';
 import type { Example } from './examples';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { requestIds } from './http/request-id';
+import { rateLimits } from './http/rate-limits';
+import { createMailer } from './mail/mailer';
+import type { Mailer } from './mail/mailer';
+import { models } from './db/models';
+import { dataApiRouter } from './routes/api';
+import { authRouter } from './routes/auth';
 import { examplesRouter } from './routes/examples';
 import { healthRouter } from './routes/health';
 
@@ -19,6 +25,8 @@ export interface AppDeps {
   examples: Example[];
   /** Folder of the built client; when it holds no index.html only the API is served. */
   clientDir: string;
+  /** How mail leaves (boot passes one for the local fake server or SMTP_URL); defaults to SMTP_URL. */
+  mailer?: Mailer;
 }
 
 /** Builds the Express app without listening, so tests can start it on any port. */
@@ -48,8 +56,20 @@ export function createApp(deps: AppDeps): express.Express {
   );
   app.use('/api', express.json({ limit: '256kb' }));
 
+  const api = {
+    config: deps.config,
+    sequelize: deps.sequelize,
+    m: models(deps.sequelize),
+    log: deps.log,
+    mailer: deps.mailer ?? createMailer(deps.config.smtpUrl ?? 'smtp://127.0.0.1:25'),
+    session: { secret: deps.config.authSecret, secureCookies: deps.config.publicUrl.startsWith('https://') },
+    limits: rateLimits(),
+  };
+  app.use('/auth', authRouter(api));
+
   app.use('/api/health', healthRouter(deps));
   app.use('/api/examples', examplesRouter(deps.examples));
+  app.use('/api', dataApiRouter(api));
   app.use('/api', apiNotFound);
 
   serveClient(app, deps.clientDir);

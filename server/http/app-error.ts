@@ -1,24 +1,11 @@
+import { API_ERROR_STATUS } from '../../src/contracts/api/errors';
+import type { ApiErrorCode } from '../../src/contracts/api/errors';
 import type { Problem } from '../../src/contracts/problems';
 
-/** Stable error codes of the API and the HTTP status each one answers with. */
-export const ERROR_STATUS = {
-  invalid_input: 400,
-  malformed_json: 400,
-  unauthenticated: 401,
-  forbidden: 403,
-  csrf_failed: 403,
-  not_found: 404,
-  method_not_allowed: 405,
-  conflict: 409,
-  gone: 410,
-  payload_too_large: 413,
-  unsupported_media_type: 415,
-  rate_limited: 429,
-  internal: 500,
-  unavailable: 503,
-} as const;
+/** Stable error codes of the API and the HTTP status each one answers with (defined with the shared contracts). */
+export const ERROR_STATUS = API_ERROR_STATUS;
 
-export type ErrorCode = keyof typeof ERROR_STATUS;
+export type ErrorCode = ApiErrorCode;
 
 /** The one JSON shape of every error reply. */
 export interface ErrorBody {
@@ -29,8 +16,8 @@ export interface ErrorBody {
 export class AppError extends Error {
   readonly code: ErrorCode;
   readonly fields: Problem[];
-  constructor(code: ErrorCode, message: string, fields: Problem[] = []) {
-    super(message);
+  constructor(code: ErrorCode, message: string, fields: Problem[] = [], options?: { cause?: unknown }) {
+    super(message, options);
     this.code = code;
     this.fields = fields;
   }

@@ -1,6 +1,9 @@
 import type { MigrationFn } from 'umzug';
 import type { MigrationContext } from '../migrate';
 import * as m0001 from './0001-app-meta';
+import * as m0002 from './0002-accounts';
+import * as m0003 from './0003-workspaces';
+import * as m0004 from './0004-library-and-scenarios';
 
 /** One migration: a stable name and its up and down steps. */
 export interface Migration {
@@ -10,4 +13,9 @@ export interface Migration {
 }
 
 /** Every migration in the order it runs. Append only; never edit one that has shipped. */
-export const migrations: Migration[] = [{ name: '0001-app-meta', ...m0001 }];
+export const migrations: Migration[] = [
+  { name: '0001-app-meta', ...m0001 },
+  { name: '0002-accounts', ...m0002 },
+  { name: '0003-workspaces', ...m0003 },
+  { name: '0004-library-and-scenarios', ...m0004 },
+];

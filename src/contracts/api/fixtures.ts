@@ -123,3 +123,4 @@ export const fixtureImportResponseSchema = z.object({
   fixtures: z.array(fixtureSchema),
 });
 export type FixtureImportResponse = z.infer<typeof fixtureImportResponseSchema>;
+export type UpdateFixtureRequestSchemaOutput = z.output<typeof updateFixtureRequestSchema>;

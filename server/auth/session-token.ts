@@ -1,0 +1,52 @@
+import { randomUUID } from 'node:crypto';
+import { encode, getToken } from '@auth/core/jwt';
+import type { Response } from 'express';
+
+/** How long a session lasts without use, in seconds: 30 days. */
+export const SESSION_MAX_AGE_S = 30 * 24 * 60 * 60;
+
+/** What the session cookie carries besides Auth.js's defaults. */
+export interface SessionClaims {
+  /** user id */
+  sub: string;
+  /** random per sign-in; binds the CSRF token to this session */
+  sid: string;
+  /** the account's session version when the session began */
+  ver: number;
+}
+
+/** Settings shared by Auth.js and the API's own session reader. */
+export interface SessionSettings {
+  secret: string;
+  /** Secure cookies (`__Secure-` prefix) when the public URL is https. */
+  secureCookies: boolean;
+}
+
+/** Name of Auth.js's session cookie, which is also the JWT's key-derivation salt. */
+export function sessionCookieName(s: SessionSettings): string {
+  return `${s.secureCookies ? '__Secure-' : ''}authjs.session-token`;
+}
+
+/** New claims for a fresh sign-in. */
+export function newClaims(userId: string, sessionVersion: number): SessionClaims {
+  return { sub: userId, sid: randomUUID(), ver: sessionVersion };
+}
+
+/**
+ * Reads and decrypts the session cookie of a request (Auth.js JWT session: an encrypted JWT that
+ * only AUTH_SECRET opens, so a session survives a restart). Only the cookie is looked at.
+ */
+export async function readSession(cookieHeader: string | undefined, s: SessionSettings): Promise<SessionClaims | null> {
+  if (!cookieHeader) return null;
+  const salt = sessionCookieName(s);
+  const token = await getToken({ req: { headers: { cookie: cookieHeader } }, secret: s.secret, secureCookie: s.secureCookies, cookieName: salt, salt });
+  if (!token || typeof token.sub !== 'string' || typeof token.sid !== 'string' || typeof token.ver !== 'number') return null;
+  return { sub: token.sub, sid: token.sid, ver: token.ver };
+}
+
+/** Re-issues the session cookie with new claims, as Auth.js would (same name, flags and lifetime). */
+export async function writeSession(res: Response, claims: SessionClaims & { name?: string; email?: string }, s: SessionSettings): Promise<void> {
+  const name = sessionCookieName(s);
+  const value = await encode({ token: { ...claims }, secret: s.secret, salt: name, maxAge: SESSION_MAX_AGE_S });
+  res.cookie(name, value, { httpOnly: true, sameSite: 'lax', path: '/', secure: s.secureCookies, maxAge: SESSION_MAX_AGE_S * 1000 });
+}
