@@ -53,9 +53,16 @@ export function compileFast(s: Scenario): FastScenario {
   const rate = 1 + s.discountRatePct / 100;
   const priceGrowth = new Float64Array(n + 1);
   const discount = new Float64Array(n + 1);
-  for (let t = 0; t <= n; t++) {
-    discount[t] = 1 / rate ** t;
-    if (t > 0) priceGrowth[t] = growth ** (t - 1);
+  // Repeated multiplication and division rather than `**`: both are correctly rounded IEEE 754
+  // operations, so the factors (and every seeded uncertainty run) are the same in every JS engine.
+  discount[0] = 1;
+  let compound = 1;
+  let grown = 1;
+  for (let t = 1; t <= n; t++) {
+    compound *= rate;
+    discount[t] = 1 / compound;
+    priceGrowth[t] = grown;
+    grown *= growth;
   }
   return {
     neededFlux: targetPpfd(s) * area,
