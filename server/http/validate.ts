@@ -12,7 +12,8 @@ function where(problems: Problem[], root: string): Problem[] {
 export function parseBody<S extends z.ZodType>(schema: S, req: Request, options: { optional?: boolean } = {}): z.output<S> {
   let body: unknown = req.body;
   if (body === undefined) {
-    const empty = !req.headers['content-length'] && !req.headers['transfer-encoding'];
+    const length = req.headers['content-length'];
+    const empty = (length === undefined || length === '0') && !req.headers['transfer-encoding'];
     if (options.optional && empty) body = {};
     else if (!req.is('application/json')) throw new AppError('unsupported_media_type', 'Send the body as JSON (Content-Type: application/json).');
   }
