@@ -43,7 +43,8 @@ export function optionFromFixture(f: FixtureFields): z.input<typeof optionSchema
 export const fixtureFieldsSchema = z.strictObject(fixtureFields).superRefine((f, ctx) => {
   const asOption = optionSchema.safeParse(optionFromFixture(f));
   if (asOption.success) return;
-  for (const issue of asOption.error.issues) {
+  // Field rules were already checked above; only the option's cross-field rules are added here.
+  for (const issue of asOption.error.issues.filter((i) => i.code === 'custom')) {
     const path = issue.path[0] === 'id' ? ['key', ...issue.path.slice(1)] : issue.path;
     ctx.addIssue({ code: 'custom', path: path as PropertyKey[], message: issue.message });
   }
