@@ -77,7 +77,8 @@ export async function startHarness(env: Record<string, string> = {}): Promise<Ha
     const page = context.pages()[0] ?? (await context.newPage());
     const errors: string[] = [];
     page.on('console', (m) => {
-      if (m.type() === 'error') errors.push(m.text());
+      // Failed requests are recorded with their status and path by the response listener below.
+      if (m.type() === 'error' && !m.text().startsWith('Failed to load resource')) errors.push(m.text());
     });
     page.on('pageerror', (e) => errors.push(e.message));
     page.on('response', (r) => {

@@ -28,8 +28,12 @@ async function signUp(s: Session, name: string, email: string, next?: string) {
   await s.page.getByRole('button', { name: 'Create the account' }).click();
 }
 
-/** The option row of the results table that carries the "lowest present value" mark. */
-async function cheapestRow(s: Session): Promise<string | null> {
+/**
+ * The option row of the results table that carries the "lowest present value" mark, once the row
+ * expected settles there (results follow the inputs after a short debounce), or whichever row has it.
+ */
+async function cheapestRow(s: Session, expected: string): Promise<string | null> {
+  await shown(s.page.locator(`tr[data-option="${expected}"]`, { hasText: 'lowest present value' }), 5000);
   const row = s.page.locator('tr[data-option]', { hasText: 'lowest present value' });
   await row.first().waitFor();
   return row.first().getAttribute('data-option');
@@ -93,7 +97,8 @@ describe('the workbench in a browser', () => {
     await p.getByRole('button', { name: 'Add this fixture' }).click();
     await p.getByRole('article', { name: /^Option 1:/ }).getByRole('button', { name: 'Remove option' }).click();
     await p.getByLabel('Title', { exact: true }).fill('Test room, LED or sodium');
-    expect(await cheapestRow(owner)).toBe('test-led');
+    await owner.screenshot('16-editor-built');
+    expect(await cheapestRow(owner, 'test-led')).toBe('test-led');
     await p.getByRole('button', { name: 'Save as revision 2' }).click();
     expect(await shown(p.getByText('Revision 2'))).toBe(true);
     scenarioUrl = new URL(p.url()).pathname;
@@ -104,20 +109,18 @@ describe('the workbench in a browser', () => {
     const p = owner.page;
     const price = p.getByLabel('Price', { exact: true });
     expect(await price.inputValue()).toBe('0.2');
-    expect(await cheapestRow(owner)).toBe('test-led');
+    expect(await cheapestRow(owner, 'test-led')).toBe('test-led');
     await price.fill('0.02');
-    await p.locator('tr[data-option="test-hps"]', { hasText: 'lowest present value' }).waitFor();
-    expect(await cheapestRow(owner)).toBe('test-hps');
+    expect(await cheapestRow(owner, 'test-hps')).toBe('test-hps');
     await owner.screenshot('17-editor-cheap-power');
 
     await p.getByRole('button', { name: 'Undo' }).click();
     expect(await price.inputValue()).toBe('0.2');
-    await p.locator('tr[data-option="test-led"]', { hasText: 'lowest present value' }).waitFor();
-    expect(await cheapestRow(owner)).toBe('test-led');
+    expect(await cheapestRow(owner, 'test-led')).toBe('test-led');
 
     await p.getByRole('button', { name: 'Redo' }).click();
     expect(await price.inputValue()).toBe('0.02');
-    await p.locator('tr[data-option="test-hps"]', { hasText: 'lowest present value' }).waitFor();
+    expect(await cheapestRow(owner, 'test-hps')).toBe('test-hps');
 
     await price.fill('');
     expect(await shown(p.getByText('Price is required.'))).toBe(true);
@@ -125,7 +128,8 @@ describe('the workbench in a browser', () => {
     expect(await price.inputValue()).toBe('0.02');
     await p.getByRole('button', { name: 'Save as revision 3' }).click();
     expect(await shown(p.getByText('Revision 3'))).toBe(true);
-    expect(owner.errors.filter((e) => !e.startsWith('4'))).toEqual([]);
+    // The only refusals so far are the ones this story provoked: a wrong password and a bad CSV line.
+    expect(owner.errors.filter((e) => !/^(401 POST \/auth\/|400 POST \/api\/workspaces\/[^/]+\/fixtures\/import)/.test(e))).toEqual([]);
   });
 
   it('shows the revision history', async () => {

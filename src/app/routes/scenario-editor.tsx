@@ -18,7 +18,13 @@ export default function ScenarioEditorPage() {
   const scenario = useScenario(scope.workspaceId, sid);
   const fixtures = useFixtures(scope.workspaceId);
   const library = useMemo<LibraryEntry[] | undefined>(
-    () => fixtures.data?.fixtures.map((f) => ({ key: f.key, label: f.label, dataSource: f.dataSource, option: optionFromFixture(f) })),
+    () =>
+      fixtures.data?.fixtures.map(({ id: _id, workspaceId: _w, createdAt: _c, updatedAt: _u, updatedBy: _b, ...fields }) => ({
+        key: fields.key,
+        label: fields.label,
+        dataSource: fields.dataSource,
+        option: optionFromFixture(fields),
+      })),
     [fixtures.data],
   );
   // Once loaded, the editor stays mounted whatever a later fetch does, so typed input is never lost.
