@@ -16,6 +16,7 @@ import { dataApiRouter } from './routes/api';
 import { authRouter } from './routes/auth';
 import { examplesRouter } from './routes/examples';
 import { healthRouter } from './routes/health';
+import { snapshotPageRouter } from './routes/snapshots-page';
 
 /** Everything the app needs from outside; built by server/index.ts or by a test. */
 export interface AppDeps {
@@ -71,6 +72,7 @@ export function createApp(deps: AppDeps): express.Express {
   app.use('/api/examples', examplesRouter(deps.examples));
   app.use('/api', dataApiRouter(api));
   app.use('/api', apiNotFound);
+  app.use('/s', snapshotPageRouter(api.m, deps.clientDir));
 
   serveClient(app, deps.clientDir);
   app.use(errorHandler(deps.log));

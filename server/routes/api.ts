@@ -9,6 +9,9 @@ import { invitationLinksRouter, workspaceInvitationsRouter } from './invitations
 import { meRouter } from './me';
 import { membersRouter } from './members';
 import { scenariosRouter } from './scenarios';
+import { workspaceSnapshotsRouter } from './snapshots';
+import { publicSnapshotsRouter } from './snapshots-public';
+import { scenarioSnapshotsRouter } from './snapshots-scenario';
 import { workspacesRouter } from './workspaces';
 
 /**
@@ -24,9 +27,12 @@ export function dataApiRouter(deps: ApiDeps): Router {
   router.use('/workspaces/:wid/members', membersRouter(deps));
   router.use('/workspaces/:wid/invitations', workspaceInvitationsRouter(deps));
   router.use('/workspaces/:wid/fixtures', fixturesRouter(deps));
+  router.use('/workspaces/:wid/scenarios/:sid/snapshots', scenarioSnapshotsRouter(deps));
   router.use('/workspaces/:wid/scenarios', scenariosRouter(deps));
+  router.use('/workspaces/:wid/snapshots', workspaceSnapshotsRouter(deps));
   router.use('/workspaces', workspacesRouter(deps));
   router.use('/invitations', invitationLinksRouter(deps));
+  router.use('/snapshots', publicSnapshotsRouter(deps));
   router.use('/admin', adminRouter(deps));
   return router;
 }

@@ -4,6 +4,7 @@ import * as m0001 from './0001-app-meta';
 import * as m0002 from './0002-accounts';
 import * as m0003 from './0003-workspaces';
 import * as m0004 from './0004-library-and-scenarios';
+import * as m0006 from './0006-snapshots';
 
 /** One migration: a stable name and its up and down steps. */
 export interface Migration {
@@ -18,4 +19,5 @@ export const migrations: Migration[] = [
   { name: '0002-accounts', ...m0002 },
   { name: '0003-workspaces', ...m0003 },
   { name: '0004-library-and-scenarios', ...m0004 },
+  { name: '0006-snapshots', ...m0006 },
 ];

@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { defineLibrary } from './library';
 import { defineRecords } from './records';
+import { defineSnapshots } from './snapshots';
 import { defineUsers } from './users';
 import { defineWorkspaces } from './workspaces';
 
@@ -8,7 +9,8 @@ import { defineWorkspaces } from './workspaces';
 export type Models = ReturnType<typeof defineUsers> &
   ReturnType<typeof defineWorkspaces> &
   ReturnType<typeof defineLibrary> &
-  ReturnType<typeof defineRecords> & { sequelize: Sequelize };
+  ReturnType<typeof defineRecords> &
+  ReturnType<typeof defineSnapshots> & { sequelize: Sequelize };
 
 const cache = new WeakMap<Sequelize, Models>();
 
@@ -19,7 +21,7 @@ const cache = new WeakMap<Sequelize, Models>();
 export function models(sequelize: Sequelize): Models {
   let m = cache.get(sequelize);
   if (!m) {
-    m = { ...defineUsers(sequelize), ...defineWorkspaces(sequelize), ...defineLibrary(sequelize), ...defineRecords(sequelize), sequelize };
+    m = { ...defineUsers(sequelize), ...defineWorkspaces(sequelize), ...defineLibrary(sequelize), ...defineRecords(sequelize), ...defineSnapshots(sequelize), sequelize };
     cache.set(sequelize, m);
   }
   return m;
