@@ -38,7 +38,8 @@ export const spectrum: CliCommand = {
       ['yield photon flux / PPFD', fixed(s.ypfdRatio, 3), 'McCree 1972 field mean'],
       ['red : far-red', fixed(s.redFarRedRatio, 2), '655–665 nm / 725–735 nm photons'],
     ];
-    process.stdout.write(`${file} (${unit})\n\n${table(['figure', 'value', 'note'], rows)}\n`);
+    const notes = s.notes.map((n) => `\nnote: ${n}`).join('');
+    process.stdout.write(`${file} (${unit})\n\n${table(['figure', 'value', 'note'], rows)}\n${notes}${notes ? '\n' : ''}`);
     return 0;
   },
 };

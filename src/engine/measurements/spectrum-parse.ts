@@ -14,7 +14,12 @@ export const SPECTRUM_UNITS: readonly SpectrumUnit[] = ['w', 'umol', 'relative']
 export interface Spectrum {
   unit: SpectrumUnit;
   wavelengthNm: number[];
+  /** Values in `unit`, 0 or more: readings below zero were counted as 0. */
   value: number[];
+  /** How many readings were below zero in the file and were counted as 0. */
+  clampedReadings: number;
+  /** The lowest reading in the file when it was below zero, in `unit`; otherwise null. */
+  lowestReading: number | null;
 }
 
 /** Largest gap between neighbouring wavelengths accepted, nm. */
@@ -44,8 +49,9 @@ function checkWavelengths(lines: number[], nm: number[], problems: FileProblem[]
 
 /**
  * Reads a spectrum from CSV text with a header line: the first column is the wavelength in nm
- * (strictly ascending, steps of at most 10 nm, covering 400–700 nm), the second the value in `unit`
- * (0 or more); further columns are ignored but every row needs as many cells as the header.
+ * (strictly ascending, steps of at most 10 nm, covering 400–700 nm), the second the value in `unit`;
+ * further columns are ignored but every row needs as many cells as the header. A reading below zero
+ * (a spectroradiometer's dark noise) counts as 0 and is counted in `clampedReadings`.
  * Returns the spectrum or every problem found, each with its line.
  */
 export function parseSpectrumCsv(text: string, unit: SpectrumUnit, options: ReadOptions = {}): FileChecked<Spectrum> {
@@ -62,6 +68,8 @@ export function parseSpectrumCsv(text: string, unit: SpectrumUnit, options: Read
   const lines: number[] = [];
   const wavelengthNm: number[] = [];
   const value: number[] = [];
+  let clampedReadings = 0;
+  let lowestReading: number | null = null;
   for (const row of rows) {
     if (row.cells.length !== header.cells.length) {
       problems.push(lineProblem(row.line, `has ${row.cells.length} values; the header has ${header.cells.length}`));
@@ -72,15 +80,18 @@ export function parseSpectrumCsv(text: string, unit: SpectrumUnit, options: Read
     if (nm === null) problems.push(lineProblem(row.line, notANumber(1, row.cells[0] ?? '')));
     else if (nm <= 0) problems.push(lineProblem(row.line, `column 1: ${nm} is not a wavelength; it must be greater than 0 nm`));
     if (v === null) problems.push(lineProblem(row.line, notANumber(2, row.cells[1] ?? '')));
-    else if (v < 0) problems.push(lineProblem(row.line, `column 2: ${row.cells[1]} is negative; set readings below zero to 0 before uploading`));
-    if (nm === null || nm <= 0 || v === null || v < 0) continue;
+    if (nm === null || nm <= 0 || v === null) continue;
+    if (v < 0) {
+      clampedReadings += 1;
+      lowestReading = Math.min(lowestReading ?? 0, v);
+    }
     lines.push(row.line);
     wavelengthNm.push(nm);
-    value.push(v);
+    value.push(Math.max(0, v));
   }
   if (problems.length === 0) checkWavelengths(lines, wavelengthNm, problems);
   if (problems.length === 0 && !(integrate(wavelengthNm, value, REQUIRED_FROM_NM, REQUIRED_TO_NM) > 0)) {
     problems.push(fileProblem(`every value over ${REQUIRED_FROM_NM}–${REQUIRED_TO_NM} nm is 0; there is no light to summarise`));
   }
-  return problems.length > 0 ? refused(problems) : { ok: true, value: { unit, wavelengthNm, value } };
+  return problems.length > 0 ? refused(problems) : { ok: true, value: { unit, wavelengthNm, value, clampedReadings, lowestReading } };
 }

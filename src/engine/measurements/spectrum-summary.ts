@@ -39,6 +39,10 @@ export interface SpectrumSummary {
   ypfdRatio: number;
   /** Photons 655–665 nm / photons 725–735 nm (Smith 1982); null when the data do not cover both or far-red is 0. */
   redFarRedRatio: number | null;
+  /** How many readings of the file were below zero and counted as 0 (instrument noise). */
+  clampedReadings: number;
+  /** Plain sentences about how the file was read, e.g. how many readings below zero were counted as 0. */
+  notes: string[];
   /** Wavelengths of the data, nm, and the photon curve (µmol m⁻² s⁻¹ nm⁻¹, or relative) for a chart. */
   wavelengthNm: number[];
   photons: number[];
@@ -52,6 +56,13 @@ export function photonCurve(s: Spectrum): number[] {
 /** The spectrum as power per nm (W m⁻² nm⁻¹, or relative), the basis of colorimetry. */
 function powerCurve(s: Spectrum, photons: number[]): readonly number[] {
   return s.unit === 'umol' ? photons.map((p, i) => p / photonsFromWatts(1, s.wavelengthNm[i]!)) : s.value;
+}
+
+function clampNotes(s: Spectrum): string[] {
+  if (s.clampedReadings === 0) return [];
+  const n = s.clampedReadings;
+  const lowest = s.lowestReading === null ? '' : ` (the lowest was ${+s.lowestReading.toPrecision(4)})`;
+  return [`${n} reading${n === 1 ? ' was' : 's were'} below zero${lowest} and ${n === 1 ? 'was' : 'were'} counted as 0, as instrument noise.`];
 }
 
 /**
@@ -92,6 +103,8 @@ export function summariseSpectrum(s: Spectrum): SpectrumSummary {
     duv: cct?.duv ?? null,
     ypfdRatio: ypf / par,
     redFarRedRatio,
+    clampedReadings: s.clampedReadings,
+    notes: clampNotes(s),
     wavelengthNm: [...nm],
     photons,
   };
