@@ -41,6 +41,7 @@ export async function boot(config: Config, log: Logger, root = process.cwd()): P
 
   // Without SMTP_URL, mail goes to the local fake server, which keeps it in the database.
   const fakeSmtp = config.smtpUrl ? undefined : await startFakeSmtp(sequelize, log);
+  if (fakeSmtp && config.production) log.warn('SMTP_URL is not set: e-mail is caught by the local fake server and never delivered');
   const mailer = createMailer(config.smtpUrl ?? fakeSmtp?.url ?? '');
   const app = createApp({ config, sequelize, log, examples, clientDir: join(root, 'dist'), mailer });
   const server = app.listen(config.port, config.host);

@@ -1,3 +1,4 @@
+/* eslint-disable @typescript-eslint/no-explicit-any -- replies are loosely typed on purpose: each test checks the fields it cares about, or parses with a shared schema */
 import { CookieJar } from './cookie-jar';
 
 /** A response read once: status, headers and the body as text and (when it is JSON) parsed. */

@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { defineLibrary } from './library';
+import { defineMeasurements } from './measurements';
 import { defineRecords } from './records';
 import { defineSnapshots } from './snapshots';
 import { defineUsers } from './users';
@@ -10,7 +11,8 @@ export type Models = ReturnType<typeof defineUsers> &
   ReturnType<typeof defineWorkspaces> &
   ReturnType<typeof defineLibrary> &
   ReturnType<typeof defineRecords> &
-  ReturnType<typeof defineSnapshots> & { sequelize: Sequelize };
+  ReturnType<typeof defineSnapshots> &
+  ReturnType<typeof defineMeasurements> & { sequelize: Sequelize };
 
 const cache = new WeakMap<Sequelize, Models>();
 
@@ -21,7 +23,7 @@ const cache = new WeakMap<Sequelize, Models>();
 export function models(sequelize: Sequelize): Models {
   let m = cache.get(sequelize);
   if (!m) {
-    m = { ...defineUsers(sequelize), ...defineWorkspaces(sequelize), ...defineLibrary(sequelize), ...defineRecords(sequelize), ...defineSnapshots(sequelize), sequelize };
+    m = { ...defineUsers(sequelize), ...defineWorkspaces(sequelize), ...defineLibrary(sequelize), ...defineRecords(sequelize), ...defineSnapshots(sequelize), ...defineMeasurements(sequelize), sequelize };
     cache.set(sequelize, m);
   }
   return m;

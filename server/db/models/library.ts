@@ -1,5 +1,5 @@
-import { DataTypes, Model } from 'sequelize';
-import type { ModelStatic, Sequelize } from 'sequelize';
+import { DataTypes } from 'sequelize';
+import type { Model, ModelStatic, Sequelize } from 'sequelize';
 import type { FixtureCsvColumn } from '../../../src/contracts/api/fixtures';
 
 /**
@@ -12,6 +12,8 @@ export type FlatFixture = Record<FixtureCsvColumn, string | number | boolean | n
 export interface FixtureRow extends FlatFixture {
   id: string;
   workspaceId: string;
+  /** the measurement the figures came from (dataSource `measured`), if any */
+  measurementId: string | null;
   updatedBy: string;
   createdAt: Date;
   updatedAt: Date;
@@ -79,6 +81,7 @@ export function defineLibrary(sequelize: Sequelize): { Fixture: FixtureModel; Sc
       cctK: real(true),
       dataSource: text(false),
       notes: { type: DataTypes.TEXT, allowNull: false },
+      measurementId: { type: DataTypes.STRING(64), allowNull: true },
       updatedBy: { type: DataTypes.STRING(64), allowNull: false },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,

@@ -1,5 +1,5 @@
-import { DataTypes, Model } from 'sequelize';
-import type { ModelStatic, Sequelize } from 'sequelize';
+import { DataTypes } from 'sequelize';
+import type { Model, ModelStatic, Sequelize } from 'sequelize';
 
 /** A row of `audit_events`. */
 export interface AuditRow {
