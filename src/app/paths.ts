@@ -26,6 +26,11 @@ export const paths = {
     pattern: '/w/:wid/scenarios/:sid/history',
     to: (wid: string, sid: string) => `/w/${enc(wid)}/scenarios/${enc(sid)}/history`,
   },
+  scenarioSensitivity: {
+    pattern: '/w/:wid/scenarios/:sid/sensitivity',
+    to: (wid: string, sid: string) => `/w/${enc(wid)}/scenarios/${enc(sid)}/sensitivity`,
+  },
   fixtures: { pattern: '/w/:wid/fixtures', to: (wid: string) => `/w/${enc(wid)}/fixtures` },
   settings: { pattern: '/w/:wid/settings', to: (wid: string) => `/w/${enc(wid)}/settings` },
+  sharedSnapshot: { pattern: '/s/:id', to: (id: string) => `/s/${enc(id)}` },
 } as const;

@@ -7,6 +7,7 @@ import { useFixtures } from '../../features/fixtures/api/get-fixtures';
 import { getScenarioQueryOptions, useScenario } from '../../features/scenarios/api/get-scenario';
 import { ScenarioEditor } from '../../features/scenarios/components/editor/scenario-editor';
 import type { LibraryEntry } from '../../features/scenarios/components/editor/library-entry';
+import { SharePanel } from '../../features/sharing/components/share-panel';
 import { useWorkspace } from '../../lib/workspace-context';
 import { paths } from '../paths';
 
@@ -37,8 +38,15 @@ export default function ScenarioEditorPage() {
     <div>
       <p className="mb-1 text-sm">
         <Link className="text-spruce-700 underline" to={paths.scenarios.to(scope.workspaceId)}>All scenarios</Link>
+        {' · '}
+        <Link className="text-spruce-700 underline" to={paths.scenarioSensitivity.to(scope.workspaceId, record.id)}>Sensitivity and uncertainty of the saved version</Link>
       </p>
       <h1 className="mb-2 text-xl font-semibold">{record.title}</h1>
+      {scope.canEdit ? (
+        <div className="mb-3">
+          <SharePanel wid={scope.workspaceId} sid={record.id} revision={record.revision} />
+        </div>
+      ) : null}
       <ScenarioEditor
         key={record.id}
         record={record}
