@@ -14,6 +14,7 @@ export function fixtureView(row: FixtureRow, updatedByName: string): Fixture {
     ...fields,
     id: row.id,
     workspaceId: row.workspaceId,
+    measurementId: row.measurementId ?? null,
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
     updatedBy: { id: row.updatedBy, name: updatedByName },

@@ -4,7 +4,9 @@ import * as m0001 from './0001-app-meta';
 import * as m0002 from './0002-accounts';
 import * as m0003 from './0003-workspaces';
 import * as m0004 from './0004-library-and-scenarios';
+import * as m0005 from './0005-measurements';
 import * as m0006 from './0006-snapshots';
+import * as m0007 from './0007-scenario-analysis';
 
 /** One migration: a stable name and its up and down steps. */
 export interface Migration {
@@ -19,5 +21,7 @@ export const migrations: Migration[] = [
   { name: '0002-accounts', ...m0002 },
   { name: '0003-workspaces', ...m0003 },
   { name: '0004-library-and-scenarios', ...m0004 },
+  { name: '0005-measurements', ...m0005 },
   { name: '0006-snapshots', ...m0006 },
+  { name: '0007-scenario-analysis', ...m0007 },
 ];

@@ -86,6 +86,8 @@ export const fixtureSchema = z.object({
   id: idSchema,
   workspaceId: idSchema,
   ...fixtureFields,
+  /** the measurement whose figures this entry carries (dataSource `measured`), if any */
+  measurementId: idSchema.nullable().default(null),
   createdAt: instantSchema,
   updatedAt: instantSchema,
   updatedBy: userRefSchema,

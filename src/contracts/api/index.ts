@@ -9,6 +9,8 @@ export * from './workspaces';
 export * from './members';
 export * from './invitations';
 export * from './fixtures';
+export * from './measurements';
 export * from './scenarios';
 export * from './result';
 export * from './admin';
+export * from './snapshots';
