@@ -2,7 +2,7 @@ import { readPpfdGrid, readSpectrum } from '../../../src/engine/measurements';
 import { as } from '../../../src/engine/units';
 import type { SquareMetres, Watts } from '../../../src/engine/units';
 import type { FileProblem } from '../../../src/engine/measurements';
-import { MEASUREMENT_FILE_LIMIT, uploadMeasurementFieldsSchema } from '../../../src/contracts/api/measurements';
+import { MEASUREMENT_FILE_LIMIT, measurementKindSchema, spectrumUnitSchema, uploadMeasurementFieldsSchema } from '../../../src/contracts/api/measurements';
 import type { UploadMeasurementFields } from '../../../src/contracts/api/measurements';
 import { check } from '../../../src/contracts/problems';
 import type { Problem } from '../../../src/contracts/problems';
@@ -60,10 +60,21 @@ export function readUpload(body: unknown, file: UploadedFile | undefined): ReadU
   if (!file) problems.push({ path: 'file', message: 'is required: choose a CSV file to upload' });
   const text = file ? decode(file.buffer) : null;
   if (file && text === null) problems.push({ path: 'file', message: 'is not UTF-8 text; save the file as CSV (UTF-8) and try again' });
-  if (checked.ok && text !== null) {
-    const read = readFile(checked.value, text);
+  // the file's lines are checked even when other fields are wrong, so one reply names everything
+  const fields = checked.ok ? checked.value : readableFields(body);
+  if (fields && text !== null) {
+    const read = readFile(fields, text);
     if (!read.ok) problems.push(...read.problems);
-    else if (problems.length === 0) return { fields: checked.value, summary: read.value };
+    else if (checked.ok && problems.length === 0) return { fields: checked.value, summary: read.value };
   }
   throw new AppError('invalid_input', 'The measurement was not stored: some fields or lines of the file are not valid.', problems);
+}
+
+/** Enough of wrong fields to read the file by: its kind and, for a spectrum, a unit (the line checks do not depend on it). */
+function readableFields(body: unknown): UploadMeasurementFields | null {
+  const raw = (body ?? {}) as Record<string, unknown>;
+  const kind = measurementKindSchema.safeParse(raw.kind);
+  if (!kind.success) return null;
+  const unit = spectrumUnitSchema.safeParse(raw.unit);
+  return { kind: kind.data, unit: unit.success ? unit.data : 'w' };
 }
