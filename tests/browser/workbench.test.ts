@@ -132,6 +132,35 @@ describe('the workbench in a browser', () => {
     expect(owner.errors.filter((e) => !/^(401 POST \/auth\/|400 POST \/api\/workspaces\/[^/]+\/fixtures\/import)/.test(e))).toEqual([]);
   });
 
+  it('keeps typing responsive while results recompute: no keystroke takes over 200 ms to paint', async () => {
+    const p = owner.page;
+    await p.evaluate(() => {
+      const w = window as unknown as { slowest: number; longTasks: number };
+      w.slowest = 0;
+      w.longTasks = 0;
+      new PerformanceObserver((list) => {
+        for (const e of list.getEntries()) w.slowest = Math.max(w.slowest, e.duration);
+      }).observe({ type: 'event', durationThreshold: 16, buffered: false } as PerformanceObserverInit);
+      new PerformanceObserver((list) => {
+        w.longTasks += list.getEntries().length;
+      }).observe({ type: 'longtask' });
+    });
+    const length = p.getByLabel('Canopy length');
+    await length.click();
+    await length.press('End');
+    await length.pressSequentially('.123456789', { delay: 30 });
+    await p.waitForTimeout(500);
+    const { slowest, longTasks } = await p.evaluate(() => {
+      const w = window as unknown as { slowest: number; longTasks: number };
+      return { slowest: w.slowest, longTasks: w.longTasks };
+    });
+    console.info(`typing: slowest keystroke ${slowest.toFixed(0)} ms to next paint, ${longTasks} main-thread tasks over 50 ms`);
+    // 200 ms is the "good" bound of Interaction to Next Paint (web.dev, Google, "Interaction to Next Paint (INP)", 2023).
+    expect(slowest).toBeLessThan(200);
+    await length.fill('4');
+    await p.getByRole('button', { name: 'Undo' }).waitFor();
+  });
+
   it('shows the revision history', async () => {
     await owner.page.goto(`${scenarioUrl}/history`);
     expect(await shown(owner.page.getByText('Revision 3', { exact: true }))).toBe(true);

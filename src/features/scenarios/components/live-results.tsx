@@ -1,6 +1,7 @@
-import { useEffect, useState } from 'react';
+import { memo, useDeferredValue, useEffect, useMemo, useState } from 'react';
 import type { UseFormReturn } from 'react-hook-form';
-import type { ScenarioInput } from '../../../contracts/scenario';
+import type { Scenario, ScenarioInput } from '../../../contracts/scenario';
+import type { ScenarioResult } from '../../../engine/result-types';
 import type { UnitSystem } from '../../../engine/units-convert';
 import { LedgerTable } from '../../../components/results/ledger-table';
 import { ResultsCharts } from '../../../components/results/results-charts';
@@ -23,7 +24,11 @@ export function LiveResults({ form, unitSystem }: { form: UseFormReturn<Scenario
     [form],
   );
   const live = useLiveResults(doc);
-  const { result, scenario } = live;
+  // Drawing new results is interruptible: a keystroke arriving meanwhile is handled first.
+  const latest = useMemo(() => (live.result && live.scenario ? { result: live.result, scenario: live.scenario } : null), [live.result, live.scenario]);
+  const shownPair = useDeferredValue(latest);
+  const result = shownPair?.result ?? null;
+  const scenario = shownPair?.scenario ?? null;
   return (
     <div className="space-y-4" aria-live="off">
       <div role="status" aria-live="polite" className="min-h-5 text-xs text-ink-soft" data-testid="compute-status">
@@ -43,21 +48,28 @@ export function LiveResults({ form, unitSystem }: { form: UseFormReturn<Scenario
       {!result || !scenario ? (
         live.problems.length === 0 ? <LoadingState what="Computing" /> : null
       ) : (
-        <>
-          <Panel title="Leveled comparison">
-            <ResultsTable scenario={scenario} result={result} unitSystem={unitSystem} />
-          </Panel>
-          <Panel title="Charts">
-            <ResultsCharts scenario={scenario} result={result} unitSystem={unitSystem} />
-          </Panel>
-          <Panel title="Year by year">
-            <LedgerTable scenario={scenario} result={result} unitSystem={unitSystem} />
-          </Panel>
-          <Panel title="Branch circuits">
-            <CircuitPlanner scenario={scenario} result={result} unitSystem={unitSystem} />
-          </Panel>
-        </>
+        <ResultsView scenario={scenario} result={result} unitSystem={unitSystem} />
       )}
     </div>
   );
 }
+
+/** The result panels; memoised so that keystrokes re-render them only when a new result arrives. */
+const ResultsView = memo(function ResultsView({ scenario, result, unitSystem }: { scenario: Scenario; result: ScenarioResult; unitSystem: UnitSystem }) {
+  return (
+    <>
+      <Panel title="Leveled comparison">
+        <ResultsTable scenario={scenario} result={result} unitSystem={unitSystem} />
+      </Panel>
+      <Panel title="Charts">
+        <ResultsCharts scenario={scenario} result={result} unitSystem={unitSystem} />
+      </Panel>
+      <Panel title="Year by year">
+        <LedgerTable scenario={scenario} result={result} unitSystem={unitSystem} />
+      </Panel>
+      <Panel title="Branch circuits">
+        <CircuitPlanner scenario={scenario} result={result} unitSystem={unitSystem} />
+      </Panel>
+    </>
+  );
+});

@@ -29,7 +29,7 @@ export function RevisionHistory({ scope, sid, onRestored }: { scope: WorkspaceSc
         {list.data.revisions.map((r) => (
           <li key={r.revision} className={`px-3 py-2 ${chosen === r.revision ? 'bg-spruce-50' : ''}`}>
             <div className="flex flex-wrap items-center gap-2">
-              <span className="figure font-medium">Revision {r.revision}</span>
+              <span className="font-semibold">Revision {r.revision}</span>
               <Badge>{ACTION_WORDS[r.action]}{r.fromRevision !== null ? ` from ${r.fromRevision}` : ''}</Badge>
               {r.revision === newest ? <Badge tone="ok">current</Badge> : null}
               <span className="text-sm text-ink-soft">{formatDateTime(r.createdAt)} · {r.createdBy.name}</span>

@@ -1,3 +1,4 @@
+import { optionSchema } from '../../../../contracts/scenario';
 import type { OptionInput } from '../../../../contracts/scenario';
 
 /** A fixture-library entry as the editor sees it: the option it stands for and where its figures come from. */
@@ -40,4 +41,12 @@ export function freeId(wanted: string, used: ReadonlySet<string>): string {
     const candidate = `${wanted.slice(0, 36)}-${i}`;
     if (!used.has(candidate)) return candidate;
   }
+}
+
+/** Only the fields a scenario option has: a library entry may carry more (notes, links to measurements). */
+export function optionFields(entry: OptionInput): OptionInput {
+  const source = entry as unknown as Record<string, unknown>;
+  const out: Record<string, unknown> = {};
+  for (const k of Object.keys(optionSchema.shape)) if (source[k] !== undefined && source[k] !== null) out[k] = structuredClone(source[k]);
+  return out as unknown as OptionInput;
 }

@@ -6,7 +6,7 @@ import { Field } from '../../../../components/ui/field';
 import { Select } from '../../../../components/ui/input';
 import { Group, useFieldError } from './form-kit';
 import type { LibraryEntry } from './library-entry';
-import { freeId } from './library-entry';
+import { freeId, optionFields } from './library-entry';
 import { OptionCard } from './option-card';
 
 /** The options compared: added from the library or blank, edited here, and the baseline chosen among them. */
@@ -20,7 +20,7 @@ export function OptionsSection({ currency, canEdit, library }: { currency: strin
   const byKey = new Map((library ?? []).map((e) => [e.key, e]));
   const used = () => new Set(getValues('options').map((o) => o.id));
 
-  const add = (option: OptionInput) => append({ ...structuredClone(option), id: freeId(option.id, used()) });
+  const add = (option: OptionInput) => append({ ...optionFields(option), id: freeId(option.id, used()) });
   const removeAt = (i: number) => {
     const removed = getValues(`options.${i}.id`);
     remove(i);

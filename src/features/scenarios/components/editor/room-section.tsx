@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Controller, useFormContext, useWatch } from 'react-hook-form';
+import { useController, useFormContext, useWatch } from 'react-hook-form';
 import type { ScenarioInput } from '../../../../contracts/scenario';
 import { Field } from '../../../../components/ui/field';
 import { dliFromPpfd, ppfdFromDli } from '../../../../engine/leveling';
@@ -12,27 +12,29 @@ import { Group, NumberField, useFieldError } from './form-kit';
 
 const identity = (v: number) => v;
 
+/** The canopy input itself; Field hands it the id, description and invalid state that tie it to its label. */
+function LengthInput({ name, unit, ...aria }: { name: 'canopy.lengthM' | 'canopy.widthM'; unit: 'm' | 'ft'; id?: string; 'aria-describedby'?: string; invalid?: boolean }) {
+  const { field } = useController<ScenarioInput, typeof name>({ name });
+  return (
+    <ConvertedNumberInput
+      key={unit}
+      {...aria}
+      name={field.name}
+      ref={field.ref}
+      onBlur={field.onBlur}
+      value={field.value}
+      onValue={field.onChange}
+      toShown={unit === 'ft' ? metresToFeet : identity}
+      fromShown={unit === 'ft' ? feetToMetres : identity}
+    />
+  );
+}
+
 function LengthField({ name, label, unit }: { name: 'canopy.lengthM' | 'canopy.widthM'; label: string; unit: 'm' | 'ft' }) {
-  const { control } = useFormContext<ScenarioInput>();
   const error = useFieldError(name, label);
   return (
     <Field label={label} unit={unit} error={error}>
-      <Controller
-        control={control}
-        name={name}
-        render={({ field }) => (
-          <ConvertedNumberInput
-            key={unit}
-            name={field.name}
-            ref={field.ref}
-            onBlur={field.onBlur}
-            value={field.value}
-            onValue={field.onChange}
-            toShown={unit === 'ft' ? metresToFeet : identity}
-            fromShown={unit === 'ft' ? feetToMetres : identity}
-          />
-        )}
-      />
+      <LengthInput name={name} unit={unit} />
     </Field>
   );
 }

@@ -118,7 +118,7 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
         {scope.canEdit ? (
           <EditorToolbar history={history} onSave={() => save()} saving={update.isPending} dirty={dirty} revision={revision} historyHref={historyHref} />
         ) : (
-          <p className="text-sm text-ink-soft">You can read this scenario and try figures in the results; only editors and owners change it. Revision {revision}.</p>
+          <p className="text-sm text-ink-soft">You can read this scenario and its results; only editors and owners change it. Revision {revision}.</p>
         )}
         {scope.canEdit ? <LeaveGuard dirty={dirty} /> : null}
         {conflict ? <ConflictNotice message={conflict} onLoadLatest={() => void loadLatest()} onSaveOver={() => void saveOver()} /> : null}

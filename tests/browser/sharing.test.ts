@@ -1,0 +1,99 @@
+import { readFileSync } from 'node:fs';
+import { gzipSync } from 'node:zlib';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_ACCOUNTS } from '../../server/db/demo-accounts';
+import { pdfText } from '../support/pdf-text';
+import { shown, startHarness } from './harness';
+import type { Harness, Session } from './harness';
+
+// One story against the real server: a consultant (the demo editor) shares a comparison with a
+// client who has no account, then withdraws it.
+let h: Harness;
+let consultant: Session;
+let client: Session;
+let link = '';
+const editor = DEMO_ACCOUNTS.find((a) => a.role === 'editor')!;
+
+beforeAll(async () => {
+  h = await startHarness();
+  consultant = await h.session();
+  client = await h.session();
+});
+afterAll(async () => {
+  await h?.close();
+});
+
+describe('sharing a snapshot in a browser', () => {
+  it('lets the consultant publish a snapshot of a saved scenario from the editor', async () => {
+    const p = consultant.page;
+    await p.goto('/sign-in');
+    await p.getByLabel('E-mail address').fill(editor.email);
+    await p.getByLabel('Password').fill(editor.password);
+    await p.getByRole('button', { name: 'Sign in', exact: true }).click();
+    expect(await shown(p.getByText('Signed in as'))).toBe(true);
+    await p.getByRole('link', { name: /Open your scenarios/ }).click();
+    await p.getByRole('link', { name: /Room A/ }).first().click();
+    await p.getByRole('button', { name: 'Share a read-only snapshot…' }).click();
+    await p.getByLabel('Notes for readers').fill('Options for the board meeting; prices are this spring’s quotes.');
+    await p.getByRole('button', { name: /Publish snapshot of revision/ }).click();
+    const row = p.locator('li[data-snapshot]').first();
+    await row.waitFor();
+    link = (await row.getByRole('link').first().getAttribute('href')) ?? '';
+    expect(link).toMatch(/\/s\/[A-Za-z0-9_-]{21}$/);
+    await consultant.screenshot('40-share-panel');
+  });
+
+  it('shows the client, without an account, the read-only page that says the figures reproduce, under 200 KB of gzipped JavaScript', async () => {
+    const p = client.page;
+    const scripts: Array<{ path: string; gz: number }> = [];
+    const onResponse = async (r: import('playwright-core').Response) => {
+      const path = new URL(r.url()).pathname;
+      if (!path.endsWith('.js')) return;
+      const body = await r.body().catch(() => Buffer.alloc(0));
+      scripts.push({ path, gz: gzipSync(body, { level: 9 }).length });
+    };
+    p.on('response', onResponse);
+    const reply = await p.goto(link);
+    expect(reply?.status()).toBe(200);
+    expect(await shown(p.getByText('These figures reproduce'))).toBe(true);
+    await p.waitForLoadState('networkidle');
+    p.off('response', onResponse);
+    const total = scripts.reduce((sum, s) => sum + s.gz, 0);
+    console.info(`public page first load: ${scripts.length} scripts, ${(total / 1024).toFixed(1)} KB gzipped`);
+    expect(total).toBeLessThan(200 * 1024);
+    expect(scripts.some((s) => /build-report|jspdf|CartesianChart/.test(s.path))).toBe(false);
+    expect(await shown(p.getByRole('table', { name: /leveled options/i }))).toBe(true);
+    expect(await shown(p.getByText('Options for the board meeting'))).toBe(true);
+    expect(await shown(p.getByRole('complementary', { name: 'Safety notes' }))).toBe(true);
+    expect(await p.getByText('Signed in as').count()).toBe(0);
+    await client.screenshot('41-shared-snapshot');
+  });
+
+  it('builds the PDF report in the browser when asked, and its text holds the title', async () => {
+    const p = client.page;
+    const title = (await p.getByRole('heading', { level: 1 }).innerText()).trim();
+    const [download] = await Promise.all([p.waitForEvent('download'), p.getByRole('button', { name: 'PDF report' }).click()]);
+    const path = await download.path();
+    const bytes = new Uint8Array(readFileSync(path));
+    expect(new TextDecoder().decode(bytes.slice(0, 5))).toBe('%PDF-');
+    const text = (await pdfText(bytes)).replace(/\s+/g, ' ');
+    expect(text).toContain(title);
+    expect(text).toContain(link.replace(/^https?:\/\/[^/]+/, ''));
+    await p.getByRole('button', { name: 'Draw the charts' }).click();
+    await p.locator('.recharts-surface').first().waitFor();
+    await client.screenshot('42-shared-snapshot-charts');
+    expect(client.errors, client.errors.join('\n')).toEqual([]);
+  });
+
+  it('gives the client the 410 page once the consultant withdraws the link', async () => {
+    const p = consultant.page;
+    p.once('dialog', (d) => void d.accept());
+    await p.locator('li[data-snapshot]').first().getByRole('button', { name: 'Withdraw link' }).click();
+    expect(await shown(p.locator('li[data-snapshot]').first().getByText('withdrawn', { exact: true }))).toBe(true);
+    await consultant.screenshot('43-share-panel-withdrawn');
+    const reply = await client.page.goto(link);
+    expect(reply?.status()).toBe(410);
+    expect(await shown(client.page.getByRole('heading', { name: 'This shared snapshot is no longer available' }))).toBe(true);
+    await client.screenshot('44-withdrawn-link');
+  });
+});
