@@ -3,6 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { snapshotResponseSchema, snapshotSummaryResponseSchema } from '../../src/contracts/api/snapshots';
 import { canonicalScenarioJson, computeScenario, ENGINE_VERSION, parseScenario, sha256Hex } from '../../src/engine';
 import { startTestApp } from '../helpers/test-app';
+import { GRID_3X3, upload } from '../measurements/uploads';
 import type { TestApp } from '../helpers/test-app';
 import { demoScope, publish } from './snapshot-setup';
 import type { DemoScope } from './snapshot-setup';
@@ -50,6 +51,24 @@ describe('publishing a snapshot', () => {
     expect((await d.editor.patch(`/api/workspaces/${d.wid}/fixtures/${first.id}`, { dataSource: 'measured', notes: 'changed later' })).status).toBe(200);
     const after = snapshotResponseSchema.parse((await app.client().get(`/api/snapshots/${snap.id}`)).body).snapshot;
     expect(after.fixtures).toEqual(before.fixtures);
+  });
+  it('copies the summaries of measurements attached to its options, which stay after the measurement is deleted', async () => {
+    const scenario = (await d.editor.get(`/api/workspaces/${d.wid}/scenarios/${d.sid}`)).body.scenario;
+    const fixtures = (await d.editor.get(`/api/workspaces/${d.wid}/fixtures`)).body.fixtures as Array<{ id: string; key: string }>;
+    const optionId = scenario.document.options[1].id as string;
+    const fixture = fixtures.find((f) => f.key === optionId)!;
+    const uploaded = await upload(d.editor, d.wid, { kind: 'grid', label: 'Bench at 40 cm', fixtureId: fixture.id }, { name: 'bench.csv', bytes: GRID_3X3 });
+    expect(uploaded.status).toBe(201);
+    const snap = await publish(d.editor, d.wid, d.sid);
+    const read = () => app.client().get(`/api/snapshots/${snap.id}`).then((r) => snapshotResponseSchema.parse(r.body).snapshot.measurements);
+    const measurements = await read();
+    expect(measurements).toHaveLength(1);
+    // The 3 x 3 grid of 400 … 800 µmol/m²/s: mean 600, min/mean 400/600, min/max 400/800 (arithmetic on the readings).
+    expect(measurements[0]).toMatchObject({ kind: 'PPFD grid', name: 'Bench at 40 cm', optionId });
+    expect(measurements[0]!.figures['mean PPFD (µmol/m²/s)']).toBeCloseTo(600, 9);
+    expect(measurements[0]!.figures['min/max']).toBeCloseTo(0.5, 9);
+    expect((await d.editor.delete(`/api/workspaces/${d.wid}/measurements/${uploaded.body.measurement.id}`)).status).toBe(204);
+    expect(await read()).toEqual(measurements);
   });
 });
 

@@ -5,6 +5,7 @@ import type { Models } from '../../db/models';
 import type { UserRow } from '../../db/models/users';
 import { AppError } from '../../http/app-error';
 import { recordAudit } from '../../repos/audit';
+import { listFixtureRows } from '../../repos/fixtures';
 import { findScenarioRow } from '../../repos/scenarios';
 import { insertSnapshot } from '../../repos/snapshots';
 import { fixtureProvenance } from './fixture-provenance';
@@ -24,7 +25,7 @@ export interface CreateSnapshot {
 /**
  * Freezes a scenario's current stored revision: validates the stored document, computes the result
  * on the server (never taking figures from the request), and copies the fixture provenance and
- * measurement summaries. The id is a 21-character nanoid from the platform's secure random source.
+ * measurement summaries as plain data. The id is a 21-character nanoid from the platform's secure random source.
  */
 export async function createSnapshot(m: Models, c: CreateSnapshot): Promise<SnapshotSummary> {
   const row = await findScenarioRow(m, c.workspaceId, c.scenarioId);
@@ -35,8 +36,9 @@ export async function createSnapshot(m: Models, c: CreateSnapshot): Promise<Snap
   const result = computeScenario(scenario);
   const inputHash = scenarioHash(scenario);
   if (result.inputHash !== inputHash) throw new Error('the result was computed from other inputs than the snapshot stores');
-  const fixtures = await fixtureProvenance(m, c.workspaceId, scenario);
-  const measurements = await measurementSummaries(m);
+  const library = new Map((await listFixtureRows(m, c.workspaceId)).map((f) => [String(f.key), f]));
+  const fixtures = fixtureProvenance(library, scenario);
+  const measurements = await measurementSummaries(m, c.workspaceId, library, scenario.options.map((o) => o.id));
   const id = nanoid();
   const created = await m.sequelize.transaction(async (t) => {
     const snapshot = await insertSnapshot(
