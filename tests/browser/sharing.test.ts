@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { gzipSync } from 'node:zlib';
+import type { Response } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNTS } from '../../server/db/demo-accounts';
 import { pdfText } from '../support/pdf-text';
@@ -46,7 +47,7 @@ describe('sharing a snapshot in a browser', () => {
   it('shows the client, without an account, the read-only page that says the figures reproduce, under 200 KB of gzipped JavaScript', async () => {
     const p = client.page;
     const scripts: Array<{ path: string; gz: number }> = [];
-    const onResponse = async (r: import('playwright-core').Response) => {
+    const onResponse = async (r: Response) => {
       const path = new URL(r.url()).pathname;
       if (!path.endsWith('.js')) return;
       const body = await r.body().catch(() => Buffer.alloc(0));
