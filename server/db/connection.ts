@@ -2,6 +2,7 @@ import { accessSync, constants, mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import { Sequelize } from 'sequelize';
 import { ConfigError } from '../config';
+import { serialiseTransactions } from './write-queue';
 
 /**
  * PRAGMAs set on every SQLite connection. WAL lets readers run while one writer commits;
@@ -29,6 +30,7 @@ export async function openDatabase(storage: string): Promise<Sequelize> {
     }
     const sequelize = new Sequelize({ dialect: 'sqlite', storage, logging: false });
     configureEachConnection(sequelize);
+    serialiseTransactions(sequelize);
     await sequelize.authenticate();
     return sequelize;
   } catch (error) {
