@@ -31,6 +31,8 @@ export const paths = {
     to: (wid: string, sid: string) => `/w/${enc(wid)}/scenarios/${enc(sid)}/sensitivity`,
   },
   fixtures: { pattern: '/w/:wid/fixtures', to: (wid: string) => `/w/${enc(wid)}/fixtures` },
+  measurements: { pattern: '/w/:wid/measurements', to: (wid: string) => `/w/${enc(wid)}/measurements` },
+  measurement: { pattern: '/w/:wid/measurements/:mid', to: (wid: string, mid: string) => `/w/${enc(wid)}/measurements/${enc(mid)}` },
   settings: { pattern: '/w/:wid/settings', to: (wid: string) => `/w/${enc(wid)}/settings` },
   sharedSnapshot: { pattern: '/s/:id', to: (id: string) => `/s/${enc(id)}` },
 } as const;

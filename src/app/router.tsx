@@ -27,6 +27,8 @@ export const router = createBrowserRouter([
           { path: paths.scenarioHistory.pattern, lazy: page(() => import('./routes/scenario-history')) },
           { path: paths.scenarioSensitivity.pattern, lazy: page(() => import('./routes/scenario-sensitivity')) },
           { path: paths.fixtures.pattern, lazy: page(() => import('./routes/fixtures')) },
+          { path: paths.measurements.pattern, lazy: page(() => import('./routes/measurements')) },
+          { path: paths.measurement.pattern, lazy: page(() => import('./routes/measurement')) },
           { path: paths.settings.pattern, lazy: page(() => import('./routes/settings')) },
         ],
       },

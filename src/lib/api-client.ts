@@ -43,7 +43,7 @@ async function ensureCsrfToken(): Promise<string | undefined> {
 /** Options of one API call. */
 export interface RequestOptions {
   method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
-  /** JSON body; a string is sent as-is with `contentType` */
+  /** JSON body; a string is sent as-is with `contentType`; FormData as multipart */
   body?: unknown;
   contentType?: string;
   headers?: Record<string, string>;
@@ -55,7 +55,9 @@ async function send(path: string, opts: RequestOptions): Promise<Response> {
   const headers: Record<string, string> = { accept: 'application/json', ...opts.headers };
   let body: BodyInit | undefined;
   if (opts.body !== undefined) {
-    if (typeof opts.body === 'string') {
+    // multipart: the browser writes the Content-Type with its boundary
+    if (opts.body instanceof FormData) body = opts.body;
+    else if (typeof opts.body === 'string') {
       body = opts.body;
       headers['content-type'] = opts.contentType ?? 'text/plain';
     } else {

@@ -18,6 +18,10 @@ export const apiPaths = {
   fixture: (wid: string, fid: string) => `/api/workspaces/${enc(wid)}/fixtures/${enc(fid)}`,
   fixturesImport: (wid: string) => `/api/workspaces/${enc(wid)}/fixtures/import`,
   fixturesExport: (wid: string) => `/api/workspaces/${enc(wid)}/fixtures/export`,
+  measurements: (wid: string) => `/api/workspaces/${enc(wid)}/measurements`,
+  measurement: (wid: string, mid: string) => `/api/workspaces/${enc(wid)}/measurements/${enc(mid)}`,
+  measurementFile: (wid: string, mid: string) => `/api/workspaces/${enc(wid)}/measurements/${enc(mid)}/file`,
+  applyMeasurement: (wid: string, mid: string) => `/api/workspaces/${enc(wid)}/measurements/${enc(mid)}/apply`,
   scenarios: (wid: string, q?: { q?: string; page?: number; pageSize?: number }) => {
     const params = new URLSearchParams();
     if (q?.q) params.set('q', q.q);

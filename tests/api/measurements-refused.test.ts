@@ -20,7 +20,7 @@ beforeAll(async () => {
 afterAll(async () => app?.close());
 
 /** Uploads and returns the status and the error's fields; checks that no row was added. */
-async function refused(fields: UploadFields, bytes: string | Uint8Array | null, name = 'bad.csv') {
+async function refused(fields: UploadFields, bytes: string | Uint8Array<ArrayBuffer> | null, name = 'bad.csv') {
   const before = await countMeasurements(app.m);
   const reply = await upload(editor, wid, fields, bytes === null ? null : { name, bytes });
   expect(await countMeasurements(app.m)).toBe(before);

@@ -14,7 +14,7 @@ export type UploadFields = Record<string, string | number | undefined>;
  * Sends a multipart upload as the web client does (session cookie, X-CSRF-Token), with the file's
  * bytes in the field `file`. `file: null` sends no file.
  */
-export async function upload(c: ApiClient, wid: string, fields: UploadFields, file: { name: string; bytes: string | Uint8Array } | null): Promise<ApiReply> {
+export async function upload(c: ApiClient, wid: string, fields: UploadFields, file: { name: string; bytes: string | Uint8Array<ArrayBuffer> } | null): Promise<ApiReply> {
   if (c.csrfToken === undefined) await c.refreshCsrf();
   const form = new FormData();
   for (const [k, v] of Object.entries(fields)) if (v !== undefined) form.append(k, String(v));

@@ -49,6 +49,7 @@ export default function WorkspaceLayout() {
         <nav aria-label="Workspace" className="flex gap-1">
           <NavLink to={paths.scenarios.to(wid)} className={tab}>Scenarios</NavLink>
           <NavLink to={paths.fixtures.to(wid)} className={tab}>Fixture library</NavLink>
+          <NavLink to={paths.measurements.to(wid)} className={tab}>Measurements</NavLink>
           <NavLink to={paths.settings.to(wid)} className={tab}>Members and settings</NavLink>
         </nav>
       </div>
