@@ -113,6 +113,12 @@ describe('measurements in a browser', () => {
     expect(await shown(p.getByText(/McCree, K\.J\. \(1972\)/))).toBe(true);
     expect(await p.getByRole('table', { name: 'Photons by band' }).locator('tbody tr').count()).toBe(4);
     await s.screenshot('65-spectrum-result');
+    await p.getByRole('link', { name: '← All measurements' }).click();
+    const rows = p.getByRole('table', { name: 'Measurements' }).locator('tbody tr');
+    await rows.first().waitFor();
+    expect(await rows.count()).toBe(2);
+    expect(await rows.first().innerText()).toMatch(/bar-light\.csv[\s\S]*spectrum[\s\S]*PPFD/);
+    await s.screenshot('66-measurements-list');
     // the refused upload of the second step is expected; nothing else may fail
     const relevant = s.errors.filter((e) => !/^400 POST \/api\/workspaces\/[^/]+\/measurements$/.test(e) && !/status of 400 \(Bad Request\)/.test(e));
     expect(relevant, relevant.join('\n')).toEqual([]);

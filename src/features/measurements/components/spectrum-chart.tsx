@@ -14,6 +14,9 @@ export default function SpectrumChart({ wavelengthNm, photons, unitLabel }: Spec
   const data = wavelengthNm.map((nm, i) => ({ nm, photons: photons[i] ?? 0 }));
   const lo = wavelengthNm[0] ?? 380;
   const hi = wavelengthNm[wavelengthNm.length - 1] ?? 780;
+  const ticks = Array.from({ length: Math.floor(hi / 50) - Math.ceil(lo / 50) + 1 }, (_, i) => (Math.ceil(lo / 50) + i) * 50);
+  const top = photons.reduce((a, b) => Math.max(a, b), 0);
+  const digits = top >= 10 ? 0 : top >= 1 ? 1 : top >= 0.1 ? 2 : 3;
   return (
     <div className="h-80 w-full" data-testid="spectrum-chart">
       <ResponsiveContainer width="100%" height="100%">
@@ -23,8 +26,8 @@ export default function SpectrumChart({ wavelengthNm, photons, unitLabel }: Spec
               label={{ value: `${b.name} ${b.nm[0]}–${b.nm[1]}`, position: 'insideTop', fontSize: 11, fill: '#1e2a2c' }} ifOverflow="hidden" />
           ))}
           <CartesianGrid stroke="#d9d4c7" strokeDasharray="2 4" vertical={false} />
-          <XAxis dataKey="nm" type="number" domain={[lo, hi]} allowDataOverflow tickCount={9} label={{ value: 'wavelength, nm', position: 'insideBottom', offset: -12, fontSize: 12 }} fontSize={11} />
-          <YAxis fontSize={11} width={56} tickFormatter={(v: number) => formatNumber(v, v < 1 ? 3 : 2)} label={{ value: unitLabel, angle: -90, position: 'insideLeft', fontSize: 11, dy: 60 }} />
+          <XAxis dataKey="nm" type="number" domain={[lo, hi]} allowDataOverflow ticks={ticks} label={{ value: 'wavelength, nm', position: 'insideBottom', offset: -12, fontSize: 12 }} fontSize={11} />
+          <YAxis fontSize={11} width={56} tickFormatter={(v: number) => formatNumber(v, digits)} label={{ value: unitLabel, angle: -90, position: 'insideLeft', fontSize: 11, dy: 60 }} />
           <Tooltip formatter={(v) => [formatNumber(Number(v), 4), unitLabel]} labelFormatter={(nm) => `${formatNumber(Number(nm), 1)} nm`} />
           <Area type="linear" dataKey="photons" stroke="#1f4a4f" strokeWidth={1.5} fill="#1f4a4f" fillOpacity={0.22} isAnimationActive={false} dot={false} />
         </AreaChart>

@@ -47,7 +47,7 @@ export function UseForFixture({ workspaceId, measurement: m }: { workspaceId: st
   }
   return (
     <div className="space-y-2">
-      <Field label="Library fixture" error={apply.error instanceof ApiError ? apply.error.fields.map((p) => `${p.path}: ${p.message}`).join('; ') || undefined : undefined}>
+      <Field label="Library fixture" className="max-w-md" error={apply.error instanceof ApiError ? apply.error.fields.map((p) => `${p.path}: ${p.message}`).join('; ') || undefined : undefined}>
         <Select value={fixtureId} onChange={(e) => { setFixtureId(e.target.value); apply.reset(); }}>
           <option value="">choose a fixture</option>
           {(fixtures.data?.fixtures ?? []).map((f) => <option key={f.id} value={f.id}>{f.label}</option>)}
