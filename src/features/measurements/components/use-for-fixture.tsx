@@ -53,7 +53,7 @@ export function UseForFixture({ workspaceId, measurement: m }: { workspaceId: st
           {(fixtures.data?.fixtures ?? []).map((f) => <option key={f.id} value={f.id}>{f.label}</option>)}
         </Select>
       </Field>
-      {fixtureId ? <WhatChanges m={m} f={chosen} /> : null}
+      {fixtureId && !apply.isSuccess ? <WhatChanges m={m} f={chosen} /> : null}
       <Button tone="primary" disabled={!fixtureId} busy={apply.isPending} onClick={() => apply.mutate({ wid: workspaceId, mid: m.id, fixtureId })}>
         {m.grid ? 'Set the fixture’s efficacy from this grid' : 'Set the fixture’s spectrum from this file'}
       </Button>
