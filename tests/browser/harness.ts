@@ -2,7 +2,7 @@ import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium } from 'playwright-core';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { BrowserContext, Locator, Page } from 'playwright-core';
 import { boot } from '../../server/boot';
 import type { Running } from '../../server/boot';
 import { buildClientIfNeeded } from '../../server/build-client';
@@ -115,7 +115,7 @@ export async function startHarness(env: Record<string, string> = {}): Promise<Ha
 }
 
 /** Waits for a locator to be visible and reports whether it is (vitest has no web-first assertions). */
-export async function shown(locator: import('playwright-core').Locator, timeout = 10_000): Promise<boolean> {
+export async function shown(locator: Locator, timeout = 10_000): Promise<boolean> {
   try {
     await locator.first().waitFor({ state: 'visible', timeout });
     return true;

@@ -76,6 +76,7 @@ describe('the sensitivity page', () => {
     await p.keyboard.press('ArrowUp');
     expect(await p.getByTestId('sweep-readout').innerText()).toMatch(/the cheapest is/);
     await s.screenshot('31-sweep-cell-read-with-keys');
+    await p.getByTestId('sweep-result').screenshot({ path: join(SCREENSHOT_DIR, '31a-sweep-cell-close-up.png') });
 
     // Every sampled cell of the table names the winner the engine finds for the same settings.
     const d = defaultAnalysisSettings(scenario, 1).sweep;

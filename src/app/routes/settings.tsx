@@ -12,7 +12,7 @@ export default function Settings() {
   return (
     <div className="space-y-4">
       <Panel title="Settings">
-        <WorkspaceSettingsForm key={`${scope.workspaceId}-${scope.name}-${scope.currency}-${scope.unitSystem}`} scope={scope} />
+        <WorkspaceSettingsForm key={scope.workspaceId} scope={scope} />
       </Panel>
       <Panel title="Members">
         <MembersTable scope={scope} currentUserId={me.data?.user?.id ?? ''} />
