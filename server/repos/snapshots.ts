@@ -1,4 +1,3 @@
-import { QueryTypes } from 'sequelize';
 import type { Transaction } from 'sequelize';
 import type { Models } from '../db/models';
 import type { SnapshotForkRow, SnapshotLinkRow, SnapshotRow } from '../db/models/snapshots';
@@ -28,13 +27,27 @@ export async function findLinkRow(m: Models, snapshotId: string): Promise<Snapsh
   return row ? row.get({ plain: true }) : null;
 }
 
+interface SqliteRead {
+  get(sql: string, params: unknown[], cb: (err: Error | null, row: unknown) => void): void;
+}
+
+/**
+ * Reads one row on the driver's shared connection (the one Sequelize uses outside transactions),
+ * skipping Sequelize's query layer: this runs on every public read of a share link.
+ */
+async function readOne<T>(m: Models, sql: string, params: unknown[]): Promise<T | undefined> {
+  const manager = m.sequelize.connectionManager as unknown as { getConnection(o: object): Promise<SqliteRead> };
+  const connection = await manager.getConnection({});
+  return new Promise((resolve, reject) => connection.get(sql, params, (err, row) => (err ? reject(err) : resolve(row as T | undefined))));
+}
+
 /** The link found by the SHA-256 of its id: one indexed read, whether or not the id exists. */
 export async function findLinkByHash(m: Models, idHash: string): Promise<Pick<SnapshotLinkRow, 'snapshotId' | 'expiresAt' | 'revokedAt'> | null> {
-  const rows = await m.sequelize.query<{ snapshot_id: string; expires_at: string | null; revoked_at: string | null }>(
+  const r = await readOne<{ snapshot_id: string; expires_at: string | null; revoked_at: string | null }>(
+    m,
     'SELECT snapshot_id, expires_at, revoked_at FROM snapshot_links WHERE id_hash = ?',
-    { replacements: [idHash], type: QueryTypes.SELECT },
+    [idHash],
   );
-  const r = rows[0];
   if (!r) return null;
   return { snapshotId: r.snapshot_id, expiresAt: r.expires_at ? new Date(r.expires_at) : null, revokedAt: r.revoked_at ? new Date(r.revoked_at) : null };
 }

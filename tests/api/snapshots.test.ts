@@ -168,7 +168,7 @@ describe('links', () => {
     expect(reply.body.error.fields).toEqual([{ path: 'expiresAt', message: 'must be in the future' }]);
   });
 
-  it('answers an unknown id no slower than a known one (medians of 40 alternating requests, loosely)', async () => {
+  it('answers an unknown id no slower than a known one (medians of 60 alternating requests, loosely)', async () => {
     const snap = await publish(d.editor, d.wid, d.sid);
     const time = async (path: string) => {
       const start = performance.now();
@@ -177,12 +177,12 @@ describe('links', () => {
     };
     const known: number[] = [];
     const unknown: number[] = [];
-    for (let i = 0; i < 40; i++) {
+    for (let i = 0; i < 60; i++) {
       known.push(await time(`/api/snapshots/${snap.id}`));
       unknown.push(await time(`/api/snapshots/${snap.id.slice(0, 20)}${snap.id.endsWith('x') ? 'y' : 'x'}`));
     }
     const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
     console.info(`median known ${median(known).toFixed(2)} ms, unknown ${median(unknown).toFixed(2)} ms`);
-    expect(median(unknown)).toBeLessThan(median(known) * 1.5 + 1);
+    expect(median(unknown)).toBeLessThan(median(known) * 1.5 + 2);
   });
 });

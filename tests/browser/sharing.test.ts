@@ -3,8 +3,10 @@ import { gzipSync } from 'node:zlib';
 import type { Response } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNTS } from '../../server/db/demo-accounts';
+import { models } from '../../server/db/models';
+import { listCaughtMail } from '../../server/repos/mail';
 import { pdfText } from '../support/pdf-text';
-import { shown, startHarness } from './harness';
+import { SCREENSHOT_DIR, shown, startHarness } from './harness';
 import type { Harness, Session } from './harness';
 
 // One story against the real server: a consultant (the demo editor) shares a comparison with a
@@ -40,8 +42,17 @@ describe('sharing a snapshot in a browser', () => {
     const row = p.locator('li[data-snapshot]').first();
     await row.waitFor();
     link = (await row.getByRole('link').first().getAttribute('href')) ?? '';
+    await row.getByRole('button', { name: 'Send by e-mail' }).click();
+    await row.getByLabel('Send to').fill('treasurer@hollowbrook.example');
+    await row.getByLabel('Note').fill('The comparison we discussed.');
+    await row.getByRole('button', { name: 'Send the link' }).click();
+    expect(await shown(row.getByText('Sent to treasurer@hollowbrook.example.'))).toBe(true);
+    const mail = (await listCaughtMail(models(h.running.sequelize))).find((m) => m.to.includes('treasurer@hollowbrook.example'));
+    expect(mail?.text).toContain(link);
+    expect(mail?.text).toContain('The comparison we discussed.');
     expect(link).toMatch(/\/s\/[A-Za-z0-9_-]{21}$/);
     await consultant.screenshot('40-share-panel');
+    await p.locator('section', { has: p.getByRole('heading', { name: 'Share a read-only snapshot' }) }).screenshot({ path: `${SCREENSHOT_DIR}/40b-share-panel-close-up.png` });
   });
 
   it('shows the client, without an account, the read-only page that says the figures reproduce, under 200 KB of gzipped JavaScript', async () => {
@@ -91,7 +102,7 @@ describe('sharing a snapshot in a browser', () => {
     p.once('dialog', (d) => void d.accept());
     await p.locator('li[data-snapshot]').first().getByRole('button', { name: 'Withdraw link' }).click();
     expect(await shown(p.locator('li[data-snapshot]').first().getByText('withdrawn', { exact: true }))).toBe(true);
-    await consultant.screenshot('43-share-panel-withdrawn');
+    await p.locator('section', { has: p.getByRole('heading', { name: 'Share a read-only snapshot' }) }).screenshot({ path: `${SCREENSHOT_DIR}/43-share-panel-withdrawn.png` });
     const reply = await client.page.goto(link);
     expect(reply?.status()).toBe(410);
     expect(await shown(client.page.getByRole('heading', { name: 'This shared snapshot is no longer available' }))).toBe(true);

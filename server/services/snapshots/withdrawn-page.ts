@@ -5,7 +5,7 @@ function esc(text: string): string {
 
 /**
  * A plain, self-contained HTML page for a share link that is gone or was never there: no scripts
- * and no styles, so it reads the same in any browser and needs nothing from the web app.
+ * and a few lines of inline style, so it needs nothing from the web app.
  */
 export function plainLinkPage(status: 404 | 410, reason: 'unknown' | 'revoked' | 'expired'): string {
   const heading = status === 404 ? 'No shared snapshot here' : 'This shared snapshot is no longer available';
@@ -22,6 +22,7 @@ export function plainLinkPage(status: 404 | 410, reason: 'unknown' | 'revoked' |
 <meta name="viewport" content="width=device-width, initial-scale=1">
 <meta name="robots" content="noindex">
 <title>${esc(heading)} · Photon Parity</title>
+<style>body{margin:0;font:16px/1.5 system-ui,sans-serif;color:#1d2a30;background:#f6f5f1}main{max-width:40rem;margin:4rem auto;padding:0 1rem}h1{font-size:1.5rem;line-height:1.25}a{color:#1f5a52}</style>
 </head>
 <body>
 <main>

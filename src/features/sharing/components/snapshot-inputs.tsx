@@ -51,7 +51,7 @@ export function SnapshotInputs({ scenario: s, fixtures }: { scenario: Scenario; 
             {s.options.map((o) => (
               <tr key={o.id} className="border-b border-line align-top">
                 <th scope="row" className="py-1 pr-2 text-left font-normal">
-                  {o.label} <TechnologyTag technology={o.technology} />
+                  <TechnologyTag technology={o.technology} /> {o.label}
                 </th>
                 <td className="figure px-2 text-right">{formatNumber(o.wallWatts, 0)} W</td>
                 <td className="figure px-2 text-right">{o.photonEfficacy !== undefined ? `${formatNumber(o.photonEfficacy, 2)} µmol/J` : `${formatNumber(o.ppf ?? 0, 0)} µmol/s`}</td>
