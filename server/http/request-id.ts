@@ -2,6 +2,11 @@ import type { RequestHandler } from 'express';
 import { randomUUID } from 'node:crypto';
 import type { Logger } from 'pino';
 
+/** The path without its query (sign-in link tokens) and with invitation secrets masked: links are bearer credentials. */
+export function loggedPath(url: string): string {
+  return (url.split('?')[0] ?? '').replace(/^(\/api\/invitations\/)[^/]+/, '$1[redacted]');
+}
+
 /**
  * Gives every request an id (echoed in the X-Request-Id header and in error bodies) and logs one
  * line when it finishes, with method, path, status and duration; never headers or bodies.
@@ -14,7 +19,7 @@ export function requestIds(log: Logger): RequestHandler {
     const start = process.hrtime.bigint();
     res.on('finish', () => {
       const ms = Number(process.hrtime.bigint() - start) / 1e6;
-      log.info({ requestId: id, method: req.method, path: req.originalUrl.split('?')[0], status: res.statusCode, ms: Math.round(ms * 10) / 10 }, 'request');
+      log.info({ requestId: id, method: req.method, path: loggedPath(req.originalUrl), status: res.statusCode, ms: Math.round(ms * 10) / 10 }, 'request');
     });
     next();
   };
