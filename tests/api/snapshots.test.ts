@@ -1,3 +1,4 @@
+import { get } from 'node:http';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { QueryTypes } from 'sequelize';
 import { snapshotResponseSchema, snapshotSummaryResponseSchema } from '../../src/contracts/api/snapshots';
@@ -159,6 +160,25 @@ describe('links', () => {
     expect(reply.status).toBe(410);
     expect(reply.body.error.fields).toEqual([{ path: 'link', message: 'expired' }]);
     expect((await fetch(`${app.base}/s/${snap.id}`)).status).toBe(410);
+  });
+
+  it('answers 304 to a reader holding the current entity tag, and a new tag once the expiry changes', async () => {
+    const snap = await publish(d.editor, d.wid, d.sid);
+    // node:http, because fetch adds Cache-Control: no-cache to conditional requests (Fetch Standard, HTTP-network-or-cache fetch).
+    const conditional = (tag: string) =>
+      new Promise<{ status: number; etag: string }>((resolve, reject) =>
+        get(`${app.base}/api/snapshots/${snap.id}`, { headers: tag ? { 'if-none-match': tag } : {} }, (res) => {
+          res.resume();
+          res.on('end', () => resolve({ status: res.statusCode ?? 0, etag: String(res.headers.etag ?? '') }));
+        }).on('error', reject),
+      );
+    const first = await conditional('');
+    expect(first.status).toBe(200);
+    expect((await conditional(first.etag)).status).toBe(304);
+    await d.editor.patch(`/api/workspaces/${d.wid}/snapshots/${snap.id}`, { expiresAt: new Date(Date.now() + 3_600_000).toISOString() });
+    const after = await conditional(first.etag);
+    expect(after.status).toBe(200);
+    expect(after.etag).not.toBe(first.etag);
   });
 
   it('refuses an expiry in the past, naming the field', async () => {
