@@ -94,6 +94,10 @@ export default function SweepHeatMap({ result, scenario, styles, showValueOf }: 
     : null;
   const cw = PW / nT;
   const ch = PH / nE;
+  // The pointed cell, drawn at least 8 units wide so it shows on a 200 × 200 grid.
+  const mark = cell
+    ? { x: M.left + (cell.t + 0.5) * cw - Math.max(cw, 8) / 2, y: M.top + (nE - 0.5 - cell.e) * ch - Math.max(ch, 8) / 2, width: Math.max(cw, 8), height: Math.max(ch, 8) }
+    : null;
 
   return (
     <div>
@@ -131,8 +135,11 @@ export default function SweepHeatMap({ result, scenario, styles, showValueOf }: 
               <text x={13} y={-10} fontSize={12} fontWeight={600} fill="#1e2a2c" stroke="#ffffff" strokeWidth={3} paintOrder="stroke">as entered</text>
             </g>
           ) : null}
-          {cell ? (
-            <rect x={M.left + cell.t * cw} y={M.top + (nE - 1 - cell.e) * ch} width={Math.max(cw, 3)} height={Math.max(ch, 3)} fill="none" stroke="#1e2a2c" strokeWidth={1.5} pointerEvents="none" />
+          {mark ? (
+            <g pointerEvents="none" fill="none">
+              <rect {...mark} stroke="#ffffff" strokeWidth={3} />
+              <rect {...mark} stroke="#1e2a2c" strokeWidth={1.5} />
+            </g>
           ) : null}
           <rect x={M.left} y={M.top} width={PW} height={PH} fill="transparent" onMouseMove={pick} onMouseLeave={() => setCell(null)} data-testid="sweep-hover-area" />
         </svg>

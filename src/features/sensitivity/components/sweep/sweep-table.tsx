@@ -26,14 +26,15 @@ export function SweepTable({ result, scenario, showValueOf }: { result: SweepRes
       <div className="mt-2 overflow-x-auto">
         <table className="w-full border-collapse" aria-label="Cheapest option by price and efficacy multiplier">
           <caption className="mb-1 text-left text-ink-soft">
-            Every cell names the cheapest option; below it, the present value of {shortName(scenario, showValueOf)}. A sample of{' '}
+            Rows: year-1 price. Columns: efficacy multiplier on {shortName(scenario, result.vary)}. Every cell names the cheapest option;
+            below it, the present value of {shortName(scenario, showValueOf)}. A sample of{' '}
             {rows.length} of {result.tariffs.length} prices and {cols.length} of {result.efficacyFactors.length} multipliers.
           </caption>
           <thead>
             <tr className="border-b border-line-strong text-ink-soft">
               <th scope="col" className="text-left font-medium">Price ({c}/kWh)</th>
               {cols.map((e) => (
-                <th key={e} scope="col" className="px-2 text-right font-medium">×{formatNumber(result.efficacyFactors[e]!, 2)} on {shortName(scenario, result.vary)}</th>
+                <th key={e} scope="col" className="px-2 text-right font-medium">×{formatNumber(result.efficacyFactors[e]!, 2)}</th>
               ))}
             </tr>
           </thead>

@@ -1,5 +1,5 @@
 import { Bar, BarChart, CartesianGrid, Legend, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
-import { formatMoney } from '../../../../lib/format';
+import { axisMoney } from '../../lib/axis-money';
 
 /** One bar pair: how far the measure moves when the input is lowered and when it is raised. */
 export interface SwingBar {
@@ -10,7 +10,7 @@ export interface SwingBar {
 
 /** Horizontal bars of the change in the measure, largest swing at the top; the table beside it has the numbers. */
 export default function SwingsChart({ bars, pct, currency }: { bars: SwingBar[]; pct: number; currency: string }) {
-  const money = (v: number) => formatMoney(String(Math.round(v)), currency);
+  const money = (v: number) => axisMoney(v, currency);
   return (
     <div className="w-full" style={{ height: 70 + bars.length * 34 }} aria-hidden="true" data-testid="swings-chart">
       <ResponsiveContainer width="100%" height="100%">

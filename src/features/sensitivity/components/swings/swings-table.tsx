@@ -3,7 +3,7 @@ import type { SwingRow } from '../../../../engine/sensitivity/swings';
 import { formatMoney, formatNumber } from '../../../../lib/format';
 import { inputLabel } from '../../lib/labels';
 
-const figure = (v: number) => formatNumber(v, Math.abs(v) >= 100 ? 0 : Math.abs(v) >= 1 ? 2 : 4);
+const figure = (v: number) => (v === 0 ? '0' : formatNumber(v, Math.abs(v) >= 100 ? 0 : Math.abs(v) >= 1 ? 2 : 4));
 
 /** Every swing with its numbers, largest first. */
 export function SwingsTable({ rows, scenario, baseMeasure }: { rows: SwingRow[]; scenario: Scenario; baseMeasure: number }) {
@@ -30,7 +30,7 @@ export function SwingsTable({ rows, scenario, baseMeasure }: { rows: SwingRow[];
               <td className="figure pr-2 text-left text-ink-soft">{i + 1}</td>
               <th scope="row" className="text-left font-normal">
                 {inputLabel(scenario, r.path)}
-                {r.clamped ? <span className="text-ink-soft" title="Kept inside the range the scenario allows"> (held at its limit)</span> : null}
+                {r.clamped ? <span className="text-ink-soft"> (rounded, or held at the edge of its allowed range)</span> : null}
               </th>
               <td className="figure px-2">{figure(r.base)} <span className="text-ink-soft">{r.unit}</span></td>
               <td className="figure px-2">{figure(r.low)}</td>

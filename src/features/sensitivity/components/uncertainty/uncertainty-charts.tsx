@@ -1,7 +1,8 @@
 import { Bar, BarChart, CartesianGrid, Cell, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { Scenario } from '../../../../contracts/scenario';
 import type { UncertaintySummary } from '../../../../engine/sensitivity/uncertainty';
-import { formatMoney, formatNumber } from '../../../../lib/format';
+import { formatNumber } from '../../../../lib/format';
+import { axisMoney } from '../../lib/axis-money';
 import { shortName } from '../../lib/labels';
 import type { OptionStyle } from '../../lib/option-colours';
 import { niceTicks } from '../../lib/ticks';
@@ -48,7 +49,7 @@ function SpreadChart({ result, scenario, colour }: { result: UncertaintySummary;
   const from = Math.min(lo - pad, ticks[0]!);
   const to = Math.max(hi + pad, ticks.at(-1)!);
   const x = (v: number) => M.left + ((v - from) / (to - from)) * (W - M.left - M.right);
-  const money = (v: number) => formatMoney(String(Math.round(v)), scenario.currency);
+  const money = (v: number) => axisMoney(v, scenario.currency);
   return (
     <svg viewBox={`0 0 ${W} ${H}`} className="w-full" data-testid="uncertainty-spread-chart">
       {ticks.map((t) => (
