@@ -28,5 +28,5 @@ export function latin1(text: string): string {
     .replace(/[\u2018\u2019]/g, "'")
     .replace(/[\u201c\u201d]/g, '"')
     .replace(/\u00d7/g, 'x')
-    .replace(/[^\u0000-\u00ff]/g, '?');
+    .replace(/[\u0100-\uffff]/g, '?');
 }
