@@ -31,6 +31,7 @@ export const apiPaths = {
     return `/api/workspaces/${enc(wid)}/scenarios${s ? `?${s}` : ''}`;
   },
   scenario: (wid: string, sid: string) => `/api/workspaces/${enc(wid)}/scenarios/${enc(sid)}`,
+  scenarioAnalysis: (wid: string, sid: string) => `/api/workspaces/${enc(wid)}/scenarios/${enc(sid)}/analysis`,
   revisions: (wid: string, sid: string) => `/api/workspaces/${enc(wid)}/scenarios/${enc(sid)}/revisions`,
   revision: (wid: string, sid: string, rev: number) => `/api/workspaces/${enc(wid)}/scenarios/${enc(sid)}/revisions/${rev}`,
   restoreRevision: (wid: string, sid: string, rev: number) => `/api/workspaces/${enc(wid)}/scenarios/${enc(sid)}/revisions/${rev}/restore`,

@@ -31,7 +31,10 @@ export function SensitivityPanel({ workspaceId, scenarioId, scenario }: { worksp
     <div className="space-y-4">
       <div className="flex flex-wrap items-center justify-between gap-2 text-sm text-ink-soft">
         <p className="max-w-3xl">
-          These runs use the scenario as last saved. Your settings below, the uncertainty seed included, are kept in this browser for this scenario.
+          These runs use the scenario as last saved.{' '}
+          {store.shared
+            ? 'The settings below, the uncertainty seed included, are kept with the scenario, so everyone who opens it gets the same runs.'
+            : 'The settings below are kept with the scenario by its editors; your changes last for this visit.'}
         </p>
         <Button size="sm" tone="quiet" onClick={store.clear}>Start again from the suggested settings</Button>
       </div>

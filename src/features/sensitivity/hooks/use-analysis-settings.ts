@@ -1,60 +1,61 @@
-import { useCallback, useState } from 'react';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useCallback, useEffect, useRef, useState } from 'react';
+import { isApiError } from '../../../lib/api-client';
+import { getAnalysisQueryOptions } from '../api/get-analysis';
+import { saveAnalysis } from '../api/save-analysis';
 import { analysisSettingsSchema } from '../lib/analysis-settings';
 import type { AnalysisSettings } from '../lib/analysis-settings';
 
-/** A person's saved analysis settings for one scenario, and how to change them. */
+/** The analysis settings kept with one scenario, and how to change them. */
 export interface SavedAnalysisSettings {
   /** what was saved, or null when nothing was (the page then starts from defaults) */
   saved: AnalysisSettings | null;
   /** false while saved settings are still being fetched */
   ready: boolean;
+  /** false for readers who may not change the scenario: their changes last for this visit only */
+  shared: boolean;
   save(settings: AnalysisSettings): void;
-  /** forgets what was saved */
+  /** forgets what was saved, so the page starts again from suggested settings */
   clear(): void;
 }
 
-const keyOf = (workspaceId: string, scenarioId: string) => `photon-parity:analysis:${workspaceId}:${scenarioId}`;
-
-function read(key: string): AnalysisSettings | null {
-  try {
-    const raw = globalThis.localStorage?.getItem(key);
-    if (!raw) return null;
-    const parsed = analysisSettingsSchema.safeParse(JSON.parse(raw));
-    return parsed.success ? parsed.data : null;
-  } catch {
-    return null;
-  }
-}
-
-function write(key: string, value: AnalysisSettings | null): void {
-  try {
-    if (value) globalThis.localStorage?.setItem(key, JSON.stringify(value));
-    else globalThis.localStorage?.removeItem(key);
-  } catch {
-    // storage full or disabled: the settings still hold for this visit
-  }
-}
+const SAVE_DELAY_MS = 600;
 
 /**
- * The analysis settings (sweep ranges, swing size, pair, uncertainty ranges and seed) saved for one
- * scenario. They live in this browser's localStorage for now; this file is the only one that knows
- * where, so storing them with the scenario on the server replaces this file alone.
+ * The analysis settings (sweep ranges, swing size, pair, uncertainty ranges and seed) kept with the
+ * scenario on the server, so everyone who opens it reruns the same draws. Editors' changes are
+ * written back after a short pause; a viewer's (refused with 403) stay in this visit.
  */
 export function useAnalysisSettings(workspaceId: string, scenarioId: string): SavedAnalysisSettings {
-  const key = keyOf(workspaceId, scenarioId);
-  const [state, setState] = useState(() => ({ key, saved: read(key) }));
-  const current = state.key === key ? state : { key, saved: read(key) };
-  if (current !== state) setState(current);
+  const queryClient = useQueryClient();
+  const query = useQuery(getAnalysisQueryOptions(workspaceId, scenarioId));
+  const [local, setLocal] = useState<{ sid: string; settings: AnalysisSettings | null } | null>(null);
+  const [shared, setShared] = useState(true);
+  const timer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
 
-  const save = useCallback((settings: AnalysisSettings) => {
-    write(key, settings);
-    setState({ key, saved: settings });
-  }, [key]);
+  useEffect(() => () => clearTimeout(timer.current), []);
 
-  const clear = useCallback(() => {
-    write(key, null);
-    setState({ key, saved: null });
-  }, [key]);
+  const save = useCallback(
+    (settings: AnalysisSettings) => {
+      setLocal({ sid: scenarioId, settings });
+      clearTimeout(timer.current);
+      if (!shared) return;
+      timer.current = setTimeout(() => {
+        saveAnalysis(workspaceId, scenarioId, settings).then(
+          (reply) => queryClient.setQueryData(getAnalysisQueryOptions(workspaceId, scenarioId).queryKey, reply),
+          (error: unknown) => {
+            if (isApiError(error, 'forbidden')) setShared(false);
+          },
+        );
+      }, SAVE_DELAY_MS);
+    },
+    [workspaceId, scenarioId, shared, queryClient],
+  );
 
-  return { saved: current.saved, ready: true, save, clear };
+  const clear = useCallback(() => setLocal({ sid: scenarioId, settings: null }), [scenarioId]);
+
+  const fromServer = query.data?.settings ? analysisSettingsSchema.safeParse(query.data.settings) : undefined;
+  const mine = local?.sid === scenarioId ? local : null;
+  const saved = mine ? mine.settings : fromServer?.success ? fromServer.data : null;
+  return { saved, ready: !query.isPending, shared, save, clear };
 }
