@@ -1,7 +1,12 @@
 import type { GridDocumentWire, MeasurementData } from '../../../contracts/api/measurements';
 import { formatNumber } from '../../../lib/format';
 import { FigureList } from './figure-list';
+import { Notice } from '../../../components/ui/notice';
 import { cellName, HeatMap } from './heat-map';
+import { LazyDetails } from './lazy-details';
+
+/** Largest grid drawn cell by cell; a browser slows down past some tens of thousands of SVG shapes. */
+const MAX_DRAWN_CELLS = 40_000;
 
 const pct = (f: number) => `${formatNumber(f * 100, 1)} %`;
 
@@ -34,9 +39,13 @@ export function GridView({ grid, data, areaM2, wallWatts }: { grid: GridDocument
         aisles, and any part of the canopy the grid does not cover, are left out, so it is usually below the photon efficacy on a datasheet,
         which counts every photon the fixture emits.
       </p>
-      <HeatMap cells={cells} xM={data.xM} yM={data.yM} min={grid.min} max={grid.max} mean={grid.mean} />
-      <details className="text-sm">
-        <summary className="cursor-pointer text-spruce-700">Every reading as a table (µmol m⁻² s⁻¹)</summary>
+      {grid.count <= MAX_DRAWN_CELLS ? (
+        <HeatMap cells={cells} xM={data.xM} yM={data.yM} min={grid.min} max={grid.max} mean={grid.mean} />
+      ) : (
+        <Notice tone="info">This grid has {formatNumber(grid.count, 0)} readings, too many to draw one by one here; the table below holds them all.</Notice>
+      )}
+      <LazyDetails className="text-sm" summary="Every reading as a table (µmol m⁻² s⁻¹)">
+        {() => (
         <div className="mt-1 max-h-96 overflow-auto">
           <table className="border-collapse" aria-label="Readings of the grid">
             <thead>
@@ -55,7 +64,8 @@ export function GridView({ grid, data, areaM2, wallWatts }: { grid: GridDocument
             </tbody>
           </table>
         </div>
-      </details>
+        )}
+      </LazyDetails>
     </div>
   );
 }

@@ -4,6 +4,7 @@ import { LoadingState } from '../../../components/ui/states';
 import { formatNumber } from '../../../lib/format';
 import { BANDS } from './bands';
 import { FigureList } from './figure-list';
+import { LazyDetails } from './lazy-details';
 import { ReferenceAttribution } from './reference-attribution';
 
 const SpectrumChart = lazy(() => import('./spectrum-chart'));
@@ -59,8 +60,8 @@ export function SpectrumView({ spectrum: s, data, unit }: { spectrum: SpectrumDo
             ))}
           </tbody>
         </table>
-        <details className="text-sm">
-          <summary className="cursor-pointer text-spruce-700">The chart's data as a table ({raw.length} wavelengths)</summary>
+        <LazyDetails className="text-sm" summary={`The chart's data as a table (${raw.length} wavelengths)`}>
+          {() => (
           <div className="mt-1 max-h-80 overflow-auto">
             <table className="w-full border-collapse" aria-label="Spectrum data">
               <thead>
@@ -79,7 +80,8 @@ export function SpectrumView({ spectrum: s, data, unit }: { spectrum: SpectrumDo
               </tbody>
             </table>
           </div>
-        </details>
+          )}
+        </LazyDetails>
       </div>
       <ReferenceAttribution />
     </div>
