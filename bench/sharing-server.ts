@@ -1,11 +1,24 @@
 import { spawn } from 'node:child_process';
+import { readFileSync } from 'node:fs';
 import type { ChildProcess } from 'node:child_process';
 import { createServer } from 'node:net';
 
 /** The real server in its own process, so the load generator does not share its event loop. */
 export interface BenchServer {
   base: string;
+  /** CPU time the server process has used so far, in ms (Linux /proc; NaN elsewhere). */
+  cpuMs(): number;
   stop(): Promise<void>;
+}
+
+/** utime + stime of a process from /proc/<pid>/stat (fields 14 and 15, in clock ticks of 10 ms on Linux). */
+function processCpuMs(pid: number | undefined): number {
+  try {
+    const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1]!.split(' ');
+    return (Number(fields[11]) + Number(fields[12])) * 10;
+  } catch {
+    return Number.NaN;
+  }
 }
 
 function freePort(): Promise<number> {
@@ -41,6 +54,7 @@ export async function startBenchServer(databasePath: string): Promise<BenchServe
   }
   return {
     base,
+    cpuMs: () => processCpuMs(child.pid),
     stop: async () => {
       child.kill('SIGTERM');
       await exited;

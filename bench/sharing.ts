@@ -1,6 +1,6 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
-import { tmpdir } from 'node:os';
+import { cpus, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { chromium } from 'playwright-core';
@@ -78,14 +78,19 @@ export const sharingSuite: BenchSuite = {
       await load(snapshotUrl, 2);
       await load(`${server.base}/api/health`, 2);
       const health = await load(`${server.base}/api/health`);
+      const cpuBefore = server.cpuMs();
       const snapshot = await load(snapshotUrl);
+      const cpuPerRequest = (server.cpuMs() - cpuBefore) / (snapshot.requests.average * SECONDS);
       const unknown = await load(unknownUrl, 5);
+      const bare = await load(`${server.base}/api/examples`, 5);
       const page = await publicPageScriptBytes(`${server.base}/s/${id}`);
       const ratio = snapshot.requests.average / health.requests.average;
       const rows: BenchRow[] = [
         { name: `GET snapshot data, ${CONNECTIONS} connections: p99`, value: snapshot.latency.p99, unit: 'ms', target: 20, direction: 'below', note: `mean ${snapshot.latency.average.toFixed(2)} ms, ${snapshot.non2xx} non-2xx, ${snapshot.errors} errors` },
         { name: 'GET snapshot data: throughput', value: snapshot.requests.average, unit: 'req/s' },
+        { name: 'GET snapshot data: server CPU per request', value: cpuPerRequest, unit: 'ms', note: `machine load average ${loadavg()[0]!.toFixed(1)} on ${cpus().length} CPUs` },
         { name: 'GET /api/health (same run): throughput', value: health.requests.average, unit: 'req/s', note: `p99 ${health.latency.p99} ms` },
+        { name: 'GET /api/examples (no database; the stack alone): throughput', value: bare.requests.average, unit: 'req/s', note: `p99 ${bare.latency.p99} ms` },
         { name: 'snapshot throughput / health throughput', value: ratio, unit: '×', target: 0.5, direction: 'above' },
         { name: 'GET unknown id (404): mean latency', value: unknown.latency.average, unit: 'ms', note: `known id mean ${snapshot.latency.average.toFixed(2)} ms; p99 ${unknown.latency.p99} ms` },
         { name: `public page /s/:id: first-load JS (${page.count} scripts)`, value: page.gz / 1024, unit: 'KB gzip', target: 200, direction: 'below' },
