@@ -1,5 +1,5 @@
 import { formatNumber } from '../../../lib/format';
-import { colourAt, scalePosition, textOn } from '../lib/colour-scale';
+import { colourAt, haloOn, scalePosition, textOn } from '../lib/colour-scale';
 import { ScaleLegend } from './scale-legend';
 
 /** What the heat map draws: readings[row][column] in µmol m⁻² s⁻¹, with positions in metres when the file gave them. */
@@ -45,7 +45,7 @@ export function HeatMap({ cells, xM, yM, min, max, mean }: HeatMapProps) {
                   <title>{`${cellName(r, c, xM, yM)}: ${formatNumber(v, 1)} µmol m⁻² s⁻¹`}</title>
                 </rect>
                 {showValues ? (
-                  <text x={MARGIN.left + c * CELL + CELL / 2} y={yOf(r) + CELL / 2} dy="0.35em" textAnchor="middle" fontSize={cols > 10 ? 10 : 12} fill={textOn(t)} pointerEvents="none">
+                  <text x={MARGIN.left + c * CELL + CELL / 2} y={yOf(r) + CELL / 2} dy="0.35em" textAnchor="middle" fontSize={cols > 10 ? 10 : 12} fill={textOn(t)} stroke={haloOn(t)} strokeWidth={1.6} paintOrder="stroke" pointerEvents="none">
                     {formatNumber(v, 0)}
                   </text>
                 ) : null}

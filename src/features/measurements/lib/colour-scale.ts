@@ -28,10 +28,28 @@ export function colourAt(t: number): string {
   return `#${rgb.map(hex).join('')}`;
 }
 
-/** Dark text on the pale half of the scale, white on the dark half (WCAG relative luminance). */
+const INK = '#1e2a2c';
+const WHITE = '#ffffff';
+
+/** WCAG 2.1 relative luminance of #rrggbb. */
+export function relativeLuminance(hex: string): number {
+  const lin = hex.slice(1).match(/../g)!.map((h) => parseInt(h, 16) / 255).map((c) => (c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4));
+  return 0.2126 * lin[0]! + 0.7152 * lin[1]! + 0.0722 * lin[2]!;
+}
+
+/** WCAG 2.1 contrast ratio of two colours, 1…21. */
+export function contrastRatio(a: string, b: string): number {
+  const [hi, lo] = [relativeLuminance(a), relativeLuminance(b)].sort((x, y) => y - x);
+  return (hi! + 0.05) / (lo! + 0.05);
+}
+
+/** Ink or white, whichever stands out more on the colour at position t. */
 export function textOn(t: number): string {
-  const rgb = colourAt(t).slice(1).match(/../g)!.map((h) => parseInt(h, 16) / 255);
-  const lin = rgb.map((c) => (c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4));
-  const luminance = 0.2126 * lin[0]! + 0.7152 * lin[1]! + 0.0722 * lin[2]!;
-  return luminance > 0.25 ? '#1e2a2c' : '#ffffff';
+  const fill = colourAt(t);
+  return contrastRatio(fill, INK) >= contrastRatio(fill, WHITE) ? INK : WHITE;
+}
+
+/** The other of ink and white: a thin halo round the figures, so their edges stand out even mid-scale. */
+export function haloOn(t: number): string {
+  return textOn(t) === INK ? WHITE : INK;
 }
