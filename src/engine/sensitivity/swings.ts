@@ -155,6 +155,11 @@ export function runSwings(s: Scenario, settings: SwingSettings, onProgress?: (do
     invalid.push(...part.invalid);
     onProgress?.(Math.min(from + perChunk, plan.inputs.length), plan.inputs.length);
   }
+  return assembleSwings(plan, rows, invalid);
+}
+
+/** Puts the rows of every chunk together into the ranked result. */
+export function assembleSwings(plan: SwingPlan, rows: SwingRow[], invalid: SwingResult['invalid']): SwingResult {
   return {
     pct: plan.pct,
     measure: plan.measure,

@@ -11,7 +11,7 @@ import { parseScenario } from '../../../engine/parse';
 import { checkSweepSettings, checkUncertaintySettings } from '../../../engine/sensitivity/checks';
 import { assembleSweep, planSweep, sweepRows } from '../../../engine/sensitivity/sweep';
 import type { SweepRows } from '../../../engine/sensitivity/sweep';
-import { checkSwingSettings, measureValue, planSwings, rankSwings, swingRows } from '../../../engine/sensitivity/swings';
+import { assembleSwings, checkSwingSettings, planSwings, swingRows } from '../../../engine/sensitivity/swings';
 import type { SwingResult } from '../../../engine/sensitivity/swings';
 import { planUncertainty, summarizeUncertainty, uncertaintyDraws } from '../../../engine/sensitivity/uncertainty';
 import type { UncertaintyChunk } from '../../../engine/sensitivity/uncertainty';
@@ -85,15 +85,7 @@ function swingsJob(s: Scenario, raw: unknown): Prepared {
       done = Math.min(done + SWINGS_PER_CHUNK, plan.inputs.length);
       return done;
     },
-    finish: (id, ms) => ({ type: 'finished', job: id, kind: 'swings', ms, result: {
-      pct: plan.pct,
-      measure: plan.measure,
-      ids: plan.ids,
-      basePresentValue: plan.basePresentValue,
-      baseMeasure: measureValue(plan.basePresentValue, plan.ids, plan.measure),
-      rows: rankSwings(rows, plan.ids, plan.measure),
-      invalid,
-    } }),
+    finish: (id, ms) => ({ type: 'finished', job: id, kind: 'swings', ms, result: assembleSwings(plan, rows, invalid) }),
   };
   return { ok: true, job };
 }
