@@ -25,7 +25,7 @@ async function signIn(s: Session, email: string, password: string) {
   await s.page.getByText('Signed in as').waitFor();
 }
 
-describe('the demo co-operative in a browser', () => {
+describe('the demo co-operative in a browser', { timeout: 120_000 }, () => {
   it('signs the demo grower in and finds the scenarios by searching their titles', async () => {
     const s = await h.session();
     await signIn(s, grower.email, grower.password);

@@ -13,7 +13,7 @@ afterAll(async () => {
   await h?.close();
 });
 
-describe('the start page', () => {
+describe('the start page', { timeout: 120_000 }, () => {
   it('loads a demo scenario through /api/examples and shows the result the engine computes, in the browser', async () => {
     const s = await h.session();
     const apiCalls: string[] = [];

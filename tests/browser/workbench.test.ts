@@ -39,7 +39,7 @@ async function cheapestRow(s: Session, expected: string): Promise<string | null>
   return row.first().getAttribute('data-option');
 }
 
-describe('the workbench in a browser', () => {
+describe('the workbench in a browser', { timeout: 120_000 }, () => {
   it('signs up, signs out and signs in again through the pages', async () => {
     await signUp(owner, 'Olive Owner', ownerEmail);
     expect(await shown(owner.page.getByText('You are not in any workspace yet'))).toBe(true);
@@ -88,6 +88,10 @@ describe('the workbench in a browser', () => {
     await p.getByLabel('Wall power of Test sodium').press('Enter');
     expect(await shown(p.locator('tr[data-fixture="test-hps"]').getByText('645'))).toBe(true);
     await owner.screenshot('15-library');
+    const [download] = await Promise.all([p.waitForEvent('download'), p.getByRole('button', { name: 'Export as CSV' }).click()]);
+    const exported = await download.path().then((file) => import('node:fs').then((fs) => fs.readFileSync(file, 'utf8')));
+    expect(exported.split(/\r?\n/)[0]).toContain('key,label,technology,wallWatts');
+    expect(exported).toContain('test-hps');
 
     await p.getByRole('link', { name: 'Scenarios' }).click();
     await p.getByRole('button', { name: 'Start a new scenario' }).click();
@@ -103,6 +107,15 @@ describe('the workbench in a browser', () => {
     expect(await shown(p.getByText('Revision 2'))).toBe(true);
     scenarioUrl = new URL(p.url()).pathname;
     await owner.screenshot('16-editor');
+
+    // DLI = PPFD × hours × 3600 / 10⁶: 600 µmol m⁻² s⁻¹ over 12 h is 25.92 mol m⁻² d⁻¹ (the relation in
+    // Faust & Logan, "Daily Light Integral: A Research Review and High-resolution Maps of the United States", HortScience 53(9), 2018;
+    // citation recalled from memory).
+    await p.getByRole('radio', { name: 'DLI over the photoperiod' }).check();
+    expect(await p.getByLabel('Target DLI').inputValue()).toBe('25.92');
+    expect(await shown(p.locator('tr[data-option="test-led"] td', { hasText: /^600$/ }))).toBe(true);
+    await p.getByRole('radio', { name: 'PPFD' }).check();
+    expect(await p.getByLabel('Target PPFD').inputValue()).toBe('600');
   });
 
   it('moves the cheapest option when the electricity price changes, and undo and redo bring it back', async () => {

@@ -43,7 +43,7 @@ export function ResultsTable({ scenario, result, unitSystem }: ResultViewProps) 
           <caption className="sr-only">Leveled options and their costs over the horizon</caption>
           <thead>
             <tr className="border-b border-line-strong text-left text-ink-soft">
-              <th scope="col" className="py-1.5 pr-2 font-medium">Option</th>
+              <th scope="col" className="min-w-[14rem] py-1.5 pr-2 font-medium">Option</th>
               <th scope="col" className="px-2 text-right font-medium">Fixtures (exact)</th>
               <th scope="col" className="px-2 text-right font-medium">Fixtures (whole)</th>
               <th scope="col" className="px-2 text-right font-medium">Achieved PPFD</th>
@@ -61,9 +61,9 @@ export function ResultsTable({ scenario, result, unitSystem }: ResultViewProps) 
               return (
                 <tr key={r.id} className={`border-b border-line ${isCheapest ? 'bg-ok-50' : ''}`} data-option={r.id}>
                   <th scope="row" className="py-1.5 pr-2 text-left font-normal">
-                    <div className="flex flex-wrap items-center gap-1.5">
+                    <div className="font-medium leading-snug">{o?.label ?? r.id}</div>
+                    <div className="mt-0.5 flex flex-wrap items-center gap-1.5">
                       {o ? <TechnologyTag technology={o.technology} /> : null}
-                      <span className="font-medium">{o?.label ?? r.id}</span>
                       {isCheapest ? <Badge tone="ok">lowest present value</Badge> : null}
                       {r.id === scenario.baseline ? <Badge tone="spruce">baseline</Badge> : null}
                     </div>

@@ -3,6 +3,11 @@ import { Notice } from '../../../components/ui/notice';
 
 const SHOWN = 12;
 
+function titleOf(differing: number): string {
+  if (differing === 0) return 'The figures match, but the inputs are not the ones stored';
+  return differing === 1 ? '1 figure differs from the published one' : `${differing} figures differ from the published ones`;
+}
+
 /**
  * Says whether the current engine, run in this browser on the stored inputs, gets the published
  * figures back; if not, which figures differ and the two engine versions.
@@ -19,7 +24,7 @@ export function ReproduceNotice({ report, hashMatches }: { report: ReproduceRepo
     );
   }
   return (
-    <Notice tone="caution" title={`${report.differences.length} figures differ from the published ones`}>
+    <Notice tone="caution" title={titleOf(report.differences.length)}>
       <p>
         Published with engine {report.storedEngineVersion}; recomputed here with engine {report.currentEngineVersion}.
         {hashMatches ? '' : ' The inputs do not hash to the SHA-256 stored with the snapshot.'}

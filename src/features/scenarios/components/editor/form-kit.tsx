@@ -20,7 +20,8 @@ export function toMoneyText(v: unknown): unknown {
 
 /** The error message at a field path, written as a sentence with the field's label. */
 export function useFieldError(name: string, label: string): string | undefined {
-  const { errors } = useFormState<ScenarioInput>();
+  // Scoped to this field, so a keystroke elsewhere does not re-render every field of the form.
+  const { errors } = useFormState<ScenarioInput>({ name: name as never });
   const e = get(errors, name) as { message?: string; root?: { message?: string } } | undefined;
   const message = e?.message ?? e?.root?.message;
   return message ? `${label} ${message}.` : undefined;
