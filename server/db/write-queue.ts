@@ -47,6 +47,7 @@ type Managed = (t: Transaction) => Promise<unknown>;
  *
  * Callbacks must not open a second managed transaction themselves (pass `t` instead): nested ones
  * would wait for their parent forever. Unmanaged transactions (no callback) pass through unchanged.
+ * `close()` first waits for the queue to empty.
  */
 export function serialiseTransactions(sequelize: Sequelize): void {
   const original = sequelize.transaction.bind(sequelize) as (options?: unknown, fn?: Managed) => Promise<unknown>;
@@ -62,5 +63,11 @@ export function serialiseTransactions(sequelize: Sequelize): void {
     if (typeof a === 'function') return queued({}, a as Managed);
     if (typeof b === 'function') return queued(a ?? {}, b as Managed);
     return original(a);
+  };
+  // Requests whose clients have gone still have their saves queued: let them commit before closing.
+  const close = sequelize.close.bind(sequelize);
+  sequelize.close = async () => {
+    for (let seen: Promise<unknown> | undefined; seen !== tail; ) await (seen = tail);
+    return close();
   };
 }

@@ -1,9 +1,14 @@
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import sqlite3 from 'sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ApiClient } from '../helpers/api-client';
 import { sampleScenario } from '../helpers/seed';
 import { startTestApp } from '../helpers/test-app';
 import type { TestApp } from '../helpers/test-app';
+import { openDatabase } from '../../server/db/connection';
+import { migrateUp } from '../../server/db/migrate';
 import { isBusyError, retryWhenBusy } from '../../server/db/write-queue';
 
 let app: TestApp;
@@ -101,5 +106,24 @@ describe('retryWhenBusy', () => {
     await expect(retryWhenBusy(async () => { calls += 1; throw { code: 'SQLITE_LOCKED' }; }, { attempts: 3, firstDelayMs: 1, maxDelayMs: 1 })).rejects.toEqual({ code: 'SQLITE_LOCKED' });
     expect(calls).toBe(3);
     expect(isBusyError(new Error('SQLITE_BUSY: database is locked'))).toBe(true);
+  });
+});
+
+describe('the write queue', () => {
+  it('lets every queued transaction commit before the database closes', async () => {
+    const path = join(mkdtempSync(join(tmpdir(), 'pp-queue-')), 'queue.sqlite');
+    const db = await openDatabase(path);
+    await migrateUp(db);
+    const writes = Array.from({ length: 40 }, (_, i) =>
+      db.transaction(async (transaction) => {
+        await db.query("INSERT INTO app_meta (key, value, updated_at) VALUES (?, 'v', 'now')", { replacements: [`queued-${i}`], transaction });
+      }),
+    );
+    await db.close();
+    await Promise.all(writes);
+    const again = await openDatabase(path);
+    const [rows] = (await again.query("SELECT COUNT(*) AS n FROM app_meta WHERE key LIKE 'queued-%'")) as [Array<{ n: number }>, unknown];
+    await again.close();
+    expect(rows[0]!.n).toBe(40);
   });
 });

@@ -31,15 +31,12 @@ describe('shutting down on SIGTERM', () => {
     const path = `/api/workspaces/${wid}/scenarios`;
     await c.refreshCsrf();
 
-    // Each request sends its headers and half its body, so the server holds it as in flight; the
-    // signal comes then, and the rest of each body only after it.
-    const halves = Array.from({ length: 80 }, (_, i) => {
-      const body = JSON.stringify({ document: sampleScenario(`in flight ${i}`) });
-      return [body.slice(0, 100), body.slice(100)] as const;
-    });
-    const headers = { cookie: c.jar.header() ?? '', 'x-csrf-token': c.csrfToken ?? '', 'content-type': 'application/json' };
-    const started = halves.map(([head, tail]) => {
-      const req = request(`${server!.base}${path}`, { method: 'POST', headers: { ...headers, 'content-length': Buffer.byteLength(head + tail) } });
+    // Each request sends its headers with Expect: 100-continue; the server's "100 Continue" proves it
+    // holds the request. The signal comes then, and each body only after it.
+    const bodies = Array.from({ length: 80 }, (_, i) => JSON.stringify({ document: sampleScenario(`in flight ${i}`) }));
+    const headers = { cookie: c.jar.header() ?? '', 'x-csrf-token': c.csrfToken ?? '', 'content-type': 'application/json', expect: '100-continue' };
+    const started = bodies.map((body) => {
+      const req = request(`${server!.base}${path}`, { method: 'POST', headers: { ...headers, 'content-length': Buffer.byteLength(body) } });
       const answered = new Promise<number | string>((resolve) => {
         req.on('response', (res) => {
           res.resume();
@@ -47,15 +44,16 @@ describe('shutting down on SIGTERM', () => {
         });
         req.on('error', (e) => resolve(`failed: ${e.message}`));
       });
-      const sent = new Promise<void>((resolve) => req.write(head, () => resolve()));
-      return { req, tail, answered, sent };
+      const held = new Promise<void>((resolve) => req.once('continue', () => resolve()));
+      req.flushHeaders();
+      return { req, body, answered, held };
     });
-    await Promise.all(started.map((s) => s.sent));
+    await Promise.all(started.map((s) => s.held));
     await new Promise((resolve) => setTimeout(resolve, 500));
     server.process.kill('SIGTERM');
     await new Promise((resolve) => setTimeout(resolve, 500));
     const fresh = await fetch(`${server.base}/api/health/live`).then((r) => r.status, () => 'refused');
-    for (const s of started) s.req.end(s.tail);
+    for (const s of started) s.req.end(s.body);
     const statuses = await Promise.all(started.map((s) => s.answered));
     expect(await server.exited).toBe(0);
 
@@ -68,7 +66,7 @@ describe('shutting down on SIGTERM', () => {
     const db = await openDatabase(databasePath);
     const [rows] = (await db.query("SELECT COUNT(*) AS n FROM scenarios WHERE title LIKE 'in flight %'")) as [Array<{ n: number }>, unknown];
     await db.close();
-    expect(rows[0]!.n).toBe(halves.length);
+    expect(rows[0]!.n).toBe(bodies.length);
   });
 });
 
