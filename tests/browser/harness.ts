@@ -1,6 +1,6 @@
-import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { dirname, join } from 'node:path';
 import { chromium } from 'playwright-core';
 import type { BrowserContext, Locator, Page } from 'playwright-core';
 import { boot } from '../../server/boot';
@@ -42,12 +42,25 @@ export interface Session {
   close(): Promise<void>;
 }
 
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
 /**
- * Builds the client when dist/ is missing or stale, boots the real server (server/boot.ts) on a free
- * port with a temporary database, and hands out isolated browser sessions.
+ * Builds the client when dist/ is missing or stale, one test file at a time: test files run in
+ * parallel processes, and two builds writing dist/ at once would leave it half written.
  */
-export async function startHarness(env: Record<string, string> = {}): Promise<Harness> {
-  const root = process.cwd();
+async function buildClientOnce(root: string): Promise<void> {
+  const lock = join(root, 'node_modules', '.cache', 'photon-parity-client-build.lock');
+  mkdirSync(dirname(lock), { recursive: true });
+  for (;;) {
+    try {
+      mkdirSync(lock);
+      break;
+    } catch {
+      const age = Date.now() - (statSafe(lock) ?? Date.now());
+      if (age > 5 * 60_000) rmSync(lock, { recursive: true, force: true });
+      await sleep(250);
+    }
+  }
   // Vitest sets NODE_ENV=test, which Vite would honour and bundle React's development build.
   const nodeEnv = process.env.NODE_ENV;
   process.env.NODE_ENV = 'production';
@@ -55,7 +68,25 @@ export async function startHarness(env: Record<string, string> = {}): Promise<Ha
     await buildClientIfNeeded(root);
   } finally {
     process.env.NODE_ENV = nodeEnv;
+    rmSync(lock, { recursive: true, force: true });
   }
+}
+
+function statSafe(path: string): number | null {
+  try {
+    return statSync(path).mtimeMs;
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * Builds the client when dist/ is missing or stale, boots the real server (server/boot.ts) on a free
+ * port with a temporary database, and hands out isolated browser sessions.
+ */
+export async function startHarness(env: Record<string, string> = {}): Promise<Harness> {
+  const root = process.cwd();
+  await buildClientOnce(root);
   const dir = mkdtempSync(join(tmpdir(), 'photon-parity-browser-'));
   const config = readConfig({ NODE_ENV: 'test', PORT: '0', HOST: '127.0.0.1', DATABASE_PATH: join(dir, 'test.sqlite'), ...env });
   const running = await boot(config, createLogger('silent'), root);
