@@ -38,6 +38,13 @@ function expected(c: Case, actor: Actor): number {
 
 const ws = (w: SeededWorkspace) => `/api/workspaces/${w.workspaceId}`;
 const sc = (w: SeededWorkspace) => `${ws(w)}/scenarios/${w.scenarioId}`;
+const analysisSettings = {
+  version: 1,
+  sweep: { vary: 'a', tariffLo: '0', tariffHi: '1', tariffN: '10', factorLo: '0.5', factorHi: '1.5', factorN: '10', showValueOf: 'a' },
+  swings: { pct: '20', measure: 'option', a: 'a', b: 'b' },
+  breakeven: { a: 'a', b: 'b' },
+  uncertainty: { seed: '42', draws: '100', inputs: [] },
+};
 const csv = 'key,label,technology,wallWatts,photonEfficacy,fixturePrice\nimported-led,Imported LED,led,320,2.7,410\n';
 
 let app: TestApp;
@@ -93,6 +100,12 @@ const CASES: Case[] = [
   { method: 'POST', path: (w) => `${sc(w)}/revisions/1/restore`, need: 'editor', ok: 200 },
   { method: 'POST', path: (w) => `${sc(w)}/duplicate`, need: 'editor', ok: 201 },
   { method: 'GET', path: (w) => `${sc(w)}/result`, need: 'viewer', ok: 200 },
+  { method: 'GET', path: (w) => `${sc(w)}/analysis`, need: 'viewer', ok: 200 },
+  { method: 'PUT', path: (w) => `${sc(w)}/analysis`, need: 'editor', ok: 200, body: () => ({ settings: analysisSettings }) },
+  { method: 'GET', path: (w) => `${sc(w)}/snapshots`, need: 'editor', ok: 200 },
+  { method: 'POST', path: (w) => `${sc(w)}/snapshots`, need: 'editor', ok: 201, body: () => ({ notes: 'matrix' }) },
+  { method: 'GET', path: (w) => `${ws(w)}/snapshots`, need: 'editor', ok: 200 },
+  { method: 'GET', path: (w) => `${ws(w)}/measurements`, need: 'viewer', ok: 200 },
   { method: 'GET', path: () => '/api/admin/users', need: 'site-admin', ok: 200 },
   { method: 'PATCH', path: (w) => `/api/admin/users/${w.extraMemberId}`, need: 'site-admin', ok: 200, body: () => ({ name: 'Renamed By Admin' }) },
   { method: 'GET', path: () => '/api/admin/mail', need: 'site-admin', ok: 200 },
