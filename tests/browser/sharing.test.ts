@@ -53,7 +53,7 @@ describe('sharing a snapshot in a browser', () => {
     expect(link).toMatch(/\/s\/[A-Za-z0-9_-]{21}$/);
     await consultant.screenshot('40-share-panel');
     await p.locator('section', { has: p.getByRole('heading', { name: 'Share a read-only snapshot' }) }).screenshot({ path: `${SCREENSHOT_DIR}/40b-share-panel-close-up.png` });
-  });
+  }, 90_000);
 
   it('shows the client, without an account, the read-only page that says the figures reproduce, under 200 KB of gzipped JavaScript', async () => {
     const p = client.page;
@@ -79,12 +79,12 @@ describe('sharing a snapshot in a browser', () => {
     expect(await shown(p.getByRole('complementary', { name: 'Safety notes' }))).toBe(true);
     expect(await p.getByText('Signed in as').count()).toBe(0);
     await client.screenshot('41-shared-snapshot');
-  });
+  }, 90_000);
 
   it('builds the PDF report in the browser when asked, and its text holds the title', async () => {
     const p = client.page;
     const title = (await p.getByRole('heading', { level: 1 }).innerText()).trim();
-    const [download] = await Promise.all([p.waitForEvent('download'), p.getByRole('button', { name: 'PDF report' }).click()]);
+    const [download] = await Promise.all([p.waitForEvent('download', { timeout: 60_000 }), p.getByRole('button', { name: 'PDF report' }).click()]);
     const path = await download.path();
     const bytes = new Uint8Array(readFileSync(path));
     expect(new TextDecoder().decode(bytes.slice(0, 5))).toBe('%PDF-');
@@ -95,7 +95,7 @@ describe('sharing a snapshot in a browser', () => {
     await p.locator('.recharts-surface').first().waitFor();
     await client.screenshot('42-shared-snapshot-charts');
     expect(client.errors, client.errors.join('\n')).toEqual([]);
-  });
+  }, 90_000);
 
   it('gives the client the 410 page once the consultant withdraws the link', async () => {
     const p = consultant.page;
