@@ -13,7 +13,8 @@ export default defineConfig({
   },
   worker: { format: 'es' },
   server: {
-    proxy: { '/api': `http://127.0.0.1:${apiPort}`, '/auth': `http://127.0.0.1:${apiPort}`, '/s/': `http://127.0.0.1:${apiPort}` },
+    // /s/<id> stays with the client in development: the read-only page asks the API for the data.
+    proxy: { '/api': `http://127.0.0.1:${apiPort}`, '/auth': `http://127.0.0.1:${apiPort}` },
   },
   test: {
     include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
