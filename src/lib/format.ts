@@ -1,4 +1,4 @@
-import { minorUnitDigits, roundForDisplay } from '../engine/money';
+import { Decimal, minorUnitDigits, roundForDisplay } from '../engine/money';
 
 const numberFormats = new Map<string, Intl.NumberFormat>();
 function nf(key: string, make: () => Intl.NumberFormat): Intl.NumberFormat {
@@ -24,12 +24,12 @@ export function formatMoney(amount: string, currency: string, locale?: string): 
   return f.format(rounded.toFixed(digits) as `${number}`);
 }
 
-/** An amount to a number of decimals beyond the minor unit (for cost per mol, e.g. 0.0123). */
+/** An amount to a number of decimals beyond the minor unit (for cost per mol, e.g. 0.0123), rounded half-even. */
 export function formatSmallMoney(amount: string, currency: string, digits = 4, locale?: string): string {
   const f = nf(`small|${currency}|${locale ?? ''}|${digits}`, () =>
     new Intl.NumberFormat(locale, { style: 'currency', currency, minimumFractionDigits: digits, maximumFractionDigits: digits }),
   );
-  return f.format(amount as `${number}`);
+  return f.format(new Decimal(amount).toDecimalPlaces(digits, Decimal.ROUND_HALF_EVEN).toFixed(digits) as `${number}`);
 }
 
 /** A plain figure with a fixed number of decimals. */

@@ -183,6 +183,31 @@ describe('the workbench in a browser', { timeout: 120_000 }, () => {
     await owner.screenshot('18-history');
   });
 
+  it('keeps typed input when someone else saved first, and saves it as the next revision on request', async () => {
+    const other = await h.session();
+    await other.page.goto('/sign-in');
+    await other.page.getByLabel('E-mail address').fill(ownerEmail);
+    await other.page.getByLabel('Password').fill(password);
+    await other.page.getByRole('button', { name: 'Sign in', exact: true }).click();
+    await other.page.getByText('Signed in as').waitFor();
+    await other.page.goto(scenarioUrl);
+    await other.page.getByLabel('Price', { exact: true }).fill('0.31');
+
+    await owner.page.goto(scenarioUrl);
+    await owner.page.getByLabel('Demand charge').fill('2.5');
+    await owner.page.getByRole('button', { name: 'Save as revision 4' }).click();
+    expect(await shown(owner.page.getByText('Revision 4', { exact: true }))).toBe(true);
+
+    await other.page.getByRole('button', { name: 'Save as revision 4' }).click();
+    expect(await shown(other.page.getByText('Someone else saved this scenario while you were editing'))).toBe(true);
+    expect(await other.page.getByLabel('Price', { exact: true }).inputValue()).toBe('0.31');
+    await other.screenshot('22-editor-conflict');
+    await other.page.getByRole('button', { name: 'Save mine as the next revision' }).click();
+    expect(await shown(other.page.getByText('Revision 5', { exact: true }))).toBe(true);
+    expect(await other.page.getByLabel('Price', { exact: true }).inputValue()).toBe('0.31');
+    await other.close();
+  });
+
   it('lets an owner invite a viewer, who sees no edit controls and whose write the API refuses', async () => {
     const p = owner.page;
     await p.getByRole('link', { name: 'Members and settings' }).click();

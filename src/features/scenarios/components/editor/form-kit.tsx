@@ -24,7 +24,9 @@ export function useFieldError(name: string, label: string): string | undefined {
   const { errors } = useFormState<ScenarioInput>({ name: name as never });
   const e = get(errors, name) as { message?: string; root?: { message?: string } } | undefined;
   const message = e?.message ?? e?.root?.message;
-  return message ? `${label} ${message}.` : undefined;
+  if (!message) return undefined;
+  // Rule messages read on from the label ("Price must be …"); whole-sentence ones follow a colon.
+  return /^(must|is|needs|repeats|has)\b/.test(message) ? `${label} ${message}.` : `${label}: ${message}.`;
 }
 
 interface BaseProps {

@@ -78,7 +78,10 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
                 setConflict(null);
               },
               onError: (e) => {
-                if (e instanceof ApiError && e.code === 'conflict') setConflict(e.message);
+                if (e instanceof ApiError && e.code === 'conflict') {
+                  const current = /\d+/.exec(e.fields.find((f) => f.path === 'revision')?.message ?? '')?.[0];
+                  setConflict(current ? `Revision ${current} was saved while you were editing revision ${atRevision}.` : e.message);
+                }
                 if (e instanceof ApiError) for (const f of e.fields) if (f.path !== 'revision') form.setError(formPath(f.path.replace(/^document\./, '')) as Path<ScenarioInput>, { message: f.message });
               },
             },
