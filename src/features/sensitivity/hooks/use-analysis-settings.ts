@@ -32,27 +32,52 @@ export function useAnalysisSettings(workspaceId: string, scenarioId: string): Sa
   const [local, setLocal] = useState<{ sid: string; settings: AnalysisSettings | null } | null>(null);
   const [shared, setShared] = useState(true);
   const timer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
+  const pending = useRef<AnalysisSettings | null>(null);
+  const sendNow = useRef(true);
 
-  useEffect(() => () => clearTimeout(timer.current), []);
+  const send = useCallback(
+    (settings: AnalysisSettings) => {
+      pending.current = null;
+      saveAnalysis(workspaceId, scenarioId, settings).then(
+        (reply) => queryClient.setQueryData(getAnalysisQueryOptions(workspaceId, scenarioId).queryKey, reply),
+        (error: unknown) => {
+          if (isApiError(error, 'forbidden')) setShared(false);
+        },
+      );
+    },
+    [workspaceId, scenarioId, queryClient],
+  );
+
+  // Leaving the page (or the scenario) sends what is still waiting rather than dropping it.
+  useEffect(
+    () => () => {
+      clearTimeout(timer.current);
+      if (pending.current) send(pending.current);
+    },
+    [send],
+  );
 
   const save = useCallback(
     (settings: AnalysisSettings) => {
       setLocal({ sid: scenarioId, settings });
       clearTimeout(timer.current);
       if (!shared) return;
-      timer.current = setTimeout(() => {
-        saveAnalysis(workspaceId, scenarioId, settings).then(
-          (reply) => queryClient.setQueryData(getAnalysisQueryOptions(workspaceId, scenarioId).queryKey, reply),
-          (error: unknown) => {
-            if (isApiError(error, 'forbidden')) setShared(false);
-          },
-        );
-      }, SAVE_DELAY_MS);
+      // The first save of a visit or after starting again (which fixes the seed) is sent at once;
+      // edits after that, a short pause after the last keystroke.
+      if (sendNow.current) {
+        sendNow.current = false;
+        return send(settings);
+      }
+      pending.current = settings;
+      timer.current = setTimeout(() => send(settings), SAVE_DELAY_MS);
     },
-    [workspaceId, scenarioId, shared, queryClient],
+    [scenarioId, shared, send],
   );
 
-  const clear = useCallback(() => setLocal({ sid: scenarioId, settings: null }), [scenarioId]);
+  const clear = useCallback(() => {
+    sendNow.current = true;
+    setLocal({ sid: scenarioId, settings: null });
+  }, [scenarioId]);
 
   const fromServer = query.data?.settings ? analysisSettingsSchema.safeParse(query.data.settings) : undefined;
   const mine = local?.sid === scenarioId ? local : null;
