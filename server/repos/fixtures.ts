@@ -1,11 +1,11 @@
 import { nanoid } from 'nanoid';
-import { QueryTypes } from 'sequelize';
 import type { Transaction } from 'sequelize';
 import { fixtureSchema } from '../../src/contracts/api/fixtures';
 import type { Fixture, FixtureFields } from '../../src/contracts/api/fixtures';
 import type { Models } from '../db/models';
 import type { FixtureRow } from '../db/models/library';
 import { flatten, unflatten } from '../services/fixtures/flat-fixture';
+import { userNames } from './users';
 
 /** Turns a stored row into the API's shape; the stored values were checked on the way in. */
 export function fixtureView(row: FixtureRow, updatedByName: string): Fixture {
@@ -21,19 +21,9 @@ export function fixtureView(row: FixtureRow, updatedByName: string): Fixture {
   });
 }
 
-async function names(m: Models, ids: string[], transaction?: Transaction): Promise<Map<string, string>> {
-  if (ids.length === 0) return new Map();
-  const rows = await m.sequelize.query<{ id: string; name: string }>('SELECT id, name FROM users WHERE id IN (:ids)', {
-    replacements: { ids: [...new Set(ids)] },
-    type: QueryTypes.SELECT,
-    transaction,
-  });
-  return new Map(rows.map((r) => [r.id, r.name]));
-}
-
 /** Rows to API objects with the editors' names. */
 export async function fixtureViews(m: Models, rows: FixtureRow[], transaction?: Transaction): Promise<Fixture[]> {
-  const byId = await names(m, rows.map((r) => r.updatedBy), transaction);
+  const byId = await userNames(m, rows.map((r) => r.updatedBy), transaction);
   return rows.map((r) => fixtureView(r, byId.get(r.updatedBy) ?? ''));
 }
 

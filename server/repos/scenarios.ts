@@ -1,23 +1,14 @@
 import { nanoid } from 'nanoid';
-import { Op, QueryTypes } from 'sequelize';
+import { Op } from 'sequelize';
 import type { Transaction } from 'sequelize';
 import type { Scenario } from '../../src/contracts/scenario';
 import type { RevisionSummary, ScenarioRecord, ScenarioSummary } from '../../src/contracts/api/scenarios';
 import type { Models } from '../db/models';
 import type { RevisionRow, ScenarioRow } from '../db/models/library';
 import { contains } from './like';
+import { userNames } from './users';
 
 export type RevisionAction = RevisionSummary['action'];
-
-async function userNames(m: Models, ids: string[], transaction?: Transaction): Promise<Map<string, string>> {
-  if (ids.length === 0) return new Map();
-  const rows = await m.sequelize.query<{ id: string; name: string }>('SELECT id, name FROM users WHERE id IN (:ids)', {
-    replacements: { ids: [...new Set(ids)] },
-    type: QueryTypes.SELECT,
-    transaction,
-  });
-  return new Map(rows.map((r) => [r.id, r.name]));
-}
 
 export async function findScenarioRow(m: Models, workspaceId: string, id: string, transaction?: Transaction): Promise<ScenarioRow | null> {
   const row = await m.Scenario.findOne({ where: { workspaceId, id, deletedAt: null }, transaction });

@@ -92,3 +92,14 @@ export async function workspaceCounts(m: Models, userIds: string[]): Promise<Map
   );
   return new Map(rows.map((r) => [r.user_id, Number(r.n)]));
 }
+
+/** Display names of users by id, in one query (missing ids are simply absent). */
+export async function userNames(m: Models, ids: string[], transaction?: Transaction): Promise<Map<string, string>> {
+  if (ids.length === 0) return new Map();
+  const rows = await m.sequelize.query<{ id: string; name: string }>('SELECT id, name FROM users WHERE id IN (:ids)', {
+    replacements: { ids: [...new Set(ids)] },
+    type: QueryTypes.SELECT,
+    transaction,
+  });
+  return new Map(rows.map((r) => [r.id, r.name]));
+}
