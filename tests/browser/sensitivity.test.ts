@@ -151,6 +151,8 @@ describe('the sensitivity page', () => {
     await s.screenshot('34-uncertainty');
     await p.getByTestId('uncertainty-result').screenshot({ path: join(SCREENSHOT_DIR, '34a-uncertainty-close-up.png') });
 
+    // A reload before the server has the new seed would rightly show the old one: wait for the page to say it is kept.
+    await p.getByRole('status').filter({ hasText: 'Settings kept with the scenario.' }).waitFor();
     await p.reload();
     await p.getByRole('heading', { name: /Where the answer changes/ }).waitFor();
     expect(Number(await p.getByLabel('Seed').inputValue())).toBe(seed);

@@ -2,6 +2,7 @@ import { useEffect, useMemo } from 'react';
 import type { Scenario } from '../../../contracts/scenario';
 import { Button } from '../../../components/ui/button';
 import { useAnalysisSettings } from '../hooks/use-analysis-settings';
+import type { SaveStatus } from '../hooks/use-analysis-settings';
 import { defaultAnalysisSettings, fitToScenario } from '../lib/analysis-settings';
 import type { AnalysisSettings } from '../lib/analysis-settings';
 import { optionStyles } from '../lib/option-colours';
@@ -36,12 +37,30 @@ export function SensitivityPanel({ workspaceId, scenarioId, scenario }: { worksp
             ? 'The settings below, the uncertainty seed included, are kept with the scenario, so everyone who opens it gets the same runs.'
             : 'The settings below are kept with the scenario by its editors; your changes last for this visit.'}
         </p>
-        <Button size="sm" tone="quiet" onClick={store.clear}>Start again from the suggested settings</Button>
+        <div className="flex items-center gap-3">
+          <SaveStatusText status={store.status} />
+          <Button size="sm" tone="quiet" onClick={store.clear}>Start again from the suggested settings</Button>
+        </div>
       </div>
       <SweepSection scenario={scenario} styles={styles} draft={settings.sweep} onDraft={(d) => update('sweep', d)} />
       <SwingsSection scenario={scenario} draft={settings.swings} onDraft={(d) => update('swings', d)} />
       <BreakevenSection scenario={scenario} draft={settings.breakeven} onDraft={(d) => update('breakeven', d)} />
       <UncertaintySection scenario={scenario} styles={styles} draft={settings.uncertainty} onDraft={(d) => update('uncertainty', d)} />
     </div>
+  );
+}
+
+const STATUS_TEXT: Record<Exclude<SaveStatus, null>, string> = {
+  saving: 'Saving the settings…',
+  saved: 'Settings kept with the scenario.',
+  failed: 'The settings could not be saved; your changes last until you leave this page.',
+};
+
+/** Says politely (to screen readers too) whether the last change of the settings reached the server. */
+function SaveStatusText({ status }: { status: SaveStatus }) {
+  return (
+    <span role="status" aria-live="polite" className={status === 'failed' ? 'text-danger' : 'text-ink-soft'}>
+      {status ? STATUS_TEXT[status] : ''}
+    </span>
   );
 }

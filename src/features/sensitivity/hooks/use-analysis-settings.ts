@@ -14,10 +14,15 @@ export interface SavedAnalysisSettings {
   ready: boolean;
   /** false for readers who may not change the scenario: their changes last for this visit only */
   shared: boolean;
+  /** where the last change stands: waiting or on its way, kept on the server, or refused (null before any change) */
+  status: SaveStatus;
   save(settings: AnalysisSettings): void;
   /** forgets what was saved, so the page starts again from suggested settings */
   clear(): void;
 }
+
+/** Where the editor's last change of the settings stands. */
+export type SaveStatus = 'saving' | 'saved' | 'failed' | null;
 
 const SAVE_DELAY_MS = 600;
 
@@ -34,14 +39,25 @@ export function useAnalysisSettings(workspaceId: string, scenarioId: string): Sa
   const timer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
   const pending = useRef<AnalysisSettings | null>(null);
   const sendNow = useRef(true);
+  const [status, setStatus] = useState<SaveStatus>(null);
+  // Only the reply to the latest change may say "saved": an earlier reply arriving late says nothing.
+  const latest = useRef(0);
 
   const send = useCallback(
     (settings: AnalysisSettings) => {
       pending.current = null;
+      const n = ++latest.current;
+      setStatus('saving');
       saveAnalysis(workspaceId, scenarioId, settings).then(
-        (reply) => queryClient.setQueryData(getAnalysisQueryOptions(workspaceId, scenarioId).queryKey, reply),
+        (reply) => {
+          queryClient.setQueryData(getAnalysisQueryOptions(workspaceId, scenarioId).queryKey, reply);
+          if (n === latest.current) setStatus('saved');
+        },
         (error: unknown) => {
-          if (isApiError(error, 'forbidden')) setShared(false);
+          if (isApiError(error, 'forbidden')) {
+            setShared(false);
+            setStatus(null);
+          } else if (n === latest.current) setStatus('failed');
         },
       );
     },
@@ -69,6 +85,8 @@ export function useAnalysisSettings(workspaceId: string, scenarioId: string): Sa
         return send(settings);
       }
       pending.current = settings;
+      latest.current++;
+      setStatus('saving');
       timer.current = setTimeout(() => send(settings), SAVE_DELAY_MS);
     },
     [scenarioId, shared, send],
@@ -82,5 +100,5 @@ export function useAnalysisSettings(workspaceId: string, scenarioId: string): Sa
   const fromServer = query.data?.settings ? analysisSettingsSchema.safeParse(query.data.settings) : undefined;
   const mine = local?.sid === scenarioId ? local : null;
   const saved = mine ? mine.settings : fromServer?.success ? fromServer.data : null;
-  return { saved, ready: !query.isPending, shared, save, clear };
+  return { saved, ready: !query.isPending, shared, status, save, clear };
 }
