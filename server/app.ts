@@ -1,13 +1,15 @@
 import { existsSync } from 'node:fs';
+import type { RequestListener } from 'node:http';
 import { join } from 'node:path';
 import express from 'express';
-import helmet from 'helmet';
 import type { Logger } from 'pino';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
 import type { Example } from './examples';
 import { apiNotFound, errorHandler } from './http/error-handler';
+import { frontDoor } from './http/front-door';
 import { requestIds } from './http/request-id';
+import { recordHeaders, securityHeaders } from './http/security-headers';
 import { rateLimits } from './http/rate-limits';
 import { createMailer } from './mail/mailer';
 import type { Mailer } from './mail/mailer';
@@ -16,6 +18,7 @@ import { dataApiRouter } from './routes/api';
 import { authRouter } from './routes/auth';
 import { examplesRouter } from './routes/examples';
 import { healthRouter } from './routes/health';
+import { snapshotDataRoute } from './routes/snapshot-data';
 import { snapshotPageRouter } from './routes/snapshots-page';
 
 /** Everything the app needs from outside; built by server/index.ts or by a test. */
@@ -36,31 +39,15 @@ export function createApp(deps: AppDeps): express.Express {
   app.disable('x-powered-by');
   app.set('trust proxy', 1);
   app.use(requestIds(deps.log));
-  app.use(
-    helmet({
-      contentSecurityPolicy: {
-        directives: {
-          defaultSrc: ["'self'"],
-          scriptSrc: ["'self'"],
-          workerSrc: ["'self'", 'blob:'],
-          // Chart libraries set inline style attributes; scripts stay strictly same-origin.
-          styleSrc: ["'self'", "'unsafe-inline'"],
-          imgSrc: ["'self'", 'data:', 'blob:'],
-          fontSrc: ["'self'", 'data:'],
-          connectSrc: ["'self'"],
-          objectSrc: ["'none'"],
-          frameAncestors: ["'none'"],
-          upgradeInsecureRequests: deps.config.production ? [] : null,
-        },
-      },
-    }),
-  );
+  app.use(securityHeaders(deps.config));
+  const m = models(deps.sequelize);
+  app.use(snapshotDataRoute(m));
   app.use('/api', express.json({ limit: '256kb' }));
 
   const api = {
     config: deps.config,
     sequelize: deps.sequelize,
-    m: models(deps.sequelize),
+    m,
     log: deps.log,
     mailer: deps.mailer ?? createMailer(deps.config.smtpUrl ?? 'smtp://127.0.0.1:25'),
     session: { secret: deps.config.authSecret, secureCookies: deps.config.publicUrl.startsWith('https://') },
@@ -77,6 +64,14 @@ export function createApp(deps: AppDeps): express.Express {
   serveClient(app, deps.clientDir);
   app.use(errorHandler(deps.log));
   return app;
+}
+
+/**
+ * The app as the server's request listener: createApp behind the front door that answers shared
+ * snapshot reads directly (server/http/front-door.ts).
+ */
+export function createRequestListener(deps: AppDeps): RequestListener {
+  return frontDoor(createApp(deps), { m: models(deps.sequelize), log: deps.log, headers: recordHeaders(securityHeaders(deps.config)) });
 }
 
 function serveClient(app: express.Express, clientDir: string): void {

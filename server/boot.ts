@@ -1,8 +1,9 @@
+import { createServer } from 'node:http';
 import type { Server } from 'node:http';
 import { join } from 'node:path';
 import type { Logger } from 'pino';
 import type { Sequelize } from 'sequelize';
-import { createApp } from './app';
+import { createRequestListener } from './app';
 import { ConfigError } from './config';
 import type { Config } from './config';
 import { publishedDemoPasswordsInUse } from './db/demo-accounts';
@@ -43,8 +44,8 @@ export async function boot(config: Config, log: Logger, root = process.cwd()): P
   const fakeSmtp = config.smtpUrl ? undefined : await startFakeSmtp(sequelize, log);
   if (fakeSmtp && config.production) log.warn('SMTP_URL is not set: e-mail is caught by the local fake server and never delivered');
   const mailer = createMailer(config.smtpUrl ?? fakeSmtp?.url ?? '');
-  const app = createApp({ config, sequelize, log, examples, clientDir: join(root, 'dist'), mailer });
-  const server = app.listen(config.port, config.host);
+  const server = createServer(createRequestListener({ config, sequelize, log, examples, clientDir: join(root, 'dist'), mailer }));
+  server.listen(config.port, config.host);
   await new Promise<void>((resolve, reject) => {
     server.once('listening', resolve);
     server.once('error', reject);

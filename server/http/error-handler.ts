@@ -15,18 +15,26 @@ export function toAppError(error: unknown): AppError {
     return new AppError('unsupported_media_type', 'The request body uses an encoding this server does not read.');
   }
   if (e?.status === 400) return new AppError('invalid_input', 'The request could not be read.');
+  // A check-then-insert that lost a race with another request (or another app instance) on a unique key.
+  if ((error as { name?: string })?.name === 'SequelizeUniqueConstraintError') {
+    return new AppError('conflict', 'Another request saved the same thing a moment ago; reload and try again.');
+  }
   return new AppError('internal', 'Something went wrong on the server. The error has been logged.');
+}
+
+/** The one error shape of every failure, for any error; unknown ones are logged and become "internal". */
+export function describeError(error: unknown, requestId: string | undefined, log: Logger): { status: number; body: ErrorBody } {
+  const appError = toAppError(error);
+  if (appError.code === 'internal') log.error({ err: error, requestId }, 'unhandled error');
+  return { status: appError.status, body: { error: { code: appError.code, message: appError.message, fields: appError.fields, requestId } } };
 }
 
 /** Express error middleware: every failure answers with the same JSON shape, never a stack trace or SQL. */
 export function errorHandler(log: Logger): ErrorRequestHandler {
   return (error, req, res, _next) => {
-    const appError = toAppError(error);
-    const requestId = (req as { id?: string }).id;
-    if (appError.code === 'internal') log.error({ err: error, requestId }, 'unhandled error');
-    const body: ErrorBody = { error: { code: appError.code, message: appError.message, fields: appError.fields, requestId } };
+    const { status, body } = describeError(error, (req as { id?: string }).id, log);
     if (res.headersSent) return;
-    res.status(appError.status).json(body);
+    res.status(status).json(body);
   };
 }
 

@@ -1,3 +1,4 @@
+import type { IncomingMessage, ServerResponse } from 'node:http';
 import type { RequestHandler } from 'express';
 import { randomUUID } from 'node:crypto';
 import type { Logger } from 'pino';
@@ -8,19 +9,25 @@ export function loggedPath(url: string): string {
 }
 
 /**
- * Gives every request an id (echoed in the X-Request-Id header and in error bodies) and logs one
- * line when it finishes, with method, path, status and duration; never headers or bodies.
+ * Gives a request an id (echoed in the X-Request-Id header and in error bodies) and logs one line
+ * when it finishes, with method, path, status and duration; never headers or bodies.
  */
+export function trackRequest(log: Logger, req: IncomingMessage, res: ServerResponse, url: string): string {
+  const id = randomUUID();
+  (req as { id?: string }).id = id;
+  res.setHeader('X-Request-Id', id);
+  const start = process.hrtime.bigint();
+  res.on('finish', () => {
+    const ms = Number(process.hrtime.bigint() - start) / 1e6;
+    log.info({ requestId: id, method: req.method, path: loggedPath(url), status: res.statusCode, ms: Math.round(ms * 10) / 10 }, 'request');
+  });
+  return id;
+}
+
+/** Express middleware form of trackRequest. */
 export function requestIds(log: Logger): RequestHandler {
   return (req, res, next) => {
-    const id = randomUUID();
-    (req as { id?: string }).id = id;
-    res.setHeader('X-Request-Id', id);
-    const start = process.hrtime.bigint();
-    res.on('finish', () => {
-      const ms = Number(process.hrtime.bigint() - start) / 1e6;
-      log.info({ requestId: id, method: req.method, path: loggedPath(req.originalUrl), status: res.statusCode, ms: Math.round(ms * 10) / 10 }, 'request');
-    });
+    trackRequest(log, req, res, req.originalUrl);
     next();
   };
 }

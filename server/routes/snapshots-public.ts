@@ -21,23 +21,15 @@ function attachment(res: Response, type: string, name: string): Response {
 }
 
 /**
- * /api/snapshots/:id: anyone holding the link reads a live snapshot and its downloads without
- * signing in; an unknown id is 404, a revoked or expired one 410. Forking needs a session.
+ * /api/snapshots/:id/…: anyone holding the link downloads a live snapshot's files without signing
+ * in; an unknown id is 404, a revoked or expired one 410. Forking needs a session. The snapshot's
+ * data itself (GET /api/snapshots/:id) is answered earlier, by snapshotDataRoute.
  */
 export function publicSnapshotsRouter({ m, config }: ApiDeps): Router {
   const router = Router();
   const reader = snapshotReader(m);
-  const open = async (req: Request): Promise<PublicSnapshot> => JSON.parse((await reader.open(idParam(req, 'id'))).snapshotJson) as PublicSnapshot;
+  const open = async (req: Request): Promise<PublicSnapshot> => JSON.parse((await reader.open(idParam(req, 'id'))).snapshotBytes.toString('utf8')) as PublicSnapshot;
 
-  router.get('/:id', async (req, res) => {
-    const id = idParam(req, 'id');
-    const { link, snapshotJson } = await reader.open(id);
-    // The snapshot never changes, so the link's state alone tells one reply from another; naming the
-    // entity tag spares Express hashing the body on every request.
-    res.type('application/json').set('Cache-Control', 'private, no-cache').set('ETag', `"${id}.${link.status}.${link.expiresAt ?? ''}"`);
-    if (req.fresh) return void res.status(304).end();
-    res.send(`{"link":${JSON.stringify(link)},"snapshot":${snapshotJson}}`);
-  });
   router.get('/:id/scenario.json', async (req, res) => {
     const s = await open(req);
     attachment(res, 'application/json', `${fileStem(s.title)}.scenario.json`).send(`${JSON.stringify(s.scenario, null, 2)}\n`);

@@ -9,6 +9,7 @@ import { accessOf, clientIp, requireCaller } from '../http/context';
 import { parseBody } from '../http/validate';
 import { recordAudit } from '../repos/audit';
 import { findLinkRow, findSnapshotRow, listSnapshotRows, revokeLink, setLinkExpiry } from '../repos/snapshots';
+import { snapshotReader } from '../services/snapshots/read-snapshot';
 import { sendSnapshot } from '../services/snapshots/send-snapshot';
 import { snapshotSummary } from '../services/snapshots/snapshot-views';
 import { publicOrigin } from './api-deps';
@@ -37,6 +38,7 @@ export function workspaceSnapshotsRouter({ m, sequelize, mailer, config }: ApiDe
     const found = await existing(req);
     if (found.link.status === 'revoked') throw new AppError('conflict', 'This link was withdrawn; publish a new snapshot to share again.', [{ path: 'link', message: 'revoked' }]);
     await setLinkExpiry(m, found.id, input.expiresAt ? new Date(input.expiresAt) : null);
+    snapshotReader(m).linksChanged();
     await recordAudit(m, { action: 'snapshot_expiry_set', actorUserId: requireCaller(req).user.id, workspaceId: wid(req), target: found.id, ip: clientIp(req), details: { expiresAt: input.expiresAt } });
     res.json({ snapshot: await existing(req) });
   });
@@ -44,6 +46,7 @@ export function workspaceSnapshotsRouter({ m, sequelize, mailer, config }: ApiDe
     parseBody(emptyBodySchema, req, { optional: true });
     const found = await existing(req);
     await revokeLink(m, found.id, requireCaller(req).user.id);
+    snapshotReader(m).linksChanged();
     await recordAudit(m, { action: 'snapshot_revoked', actorUserId: requireCaller(req).user.id, workspaceId: wid(req), target: found.id, ip: clientIp(req) });
     res.json({ snapshot: await existing(req) });
   });

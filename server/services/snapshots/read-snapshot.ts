@@ -4,11 +4,11 @@ import type { Models } from '../../db/models';
 import { AppError } from '../../http/app-error';
 import { findLinkByHash, loadSnapshotRow } from '../../repos/snapshots';
 import { hashSnapshotId, linkView } from './link-state';
-import { TextLru } from './lru-cache';
+import { SizedLru } from './lru-cache';
 import { publicSnapshot } from './snapshot-views';
 
-/** Up to this many characters of serialized snapshots stay in memory (about 32 MB of text). */
-const CACHE_CHARS = 32 * 1024 * 1024;
+/** Up to this many bytes of serialized snapshots stay in memory. */
+const CACHE_BYTES = 32 * 1024 * 1024;
 const NO_MATCH = Buffer.alloc(32);
 
 /** What a share id leads to: nothing, or a snapshot with its link's current state. */
@@ -17,17 +17,39 @@ export type LinkLookup = { found: false } | { found: true; snapshotId: string; l
 /**
  * Public reads of snapshots by share id. Every lookup does the same work whether the id exists or
  * not: one indexed read by the id's SHA-256 and one constant-time comparison, so an unknown id
- * answers no slower than a known one. Snapshots never change, so their JSON is cached; the link's
- * state (revoked, expired) is read from the database on every request.
+ * answers no slower than a known one. Snapshots never change, so their JSON is cached (as UTF-8
+ * bytes, ready to send); the link's state (revoked, expired) is read from the database for every
+ * request, except that requests for one id arriving while its read is under way share that read.
  */
 export class SnapshotReader {
-  private readonly cache = new TextLru(CACHE_CHARS);
+  private readonly cache = new SizedLru<Buffer>(CACHE_BYTES);
+  private readonly reading = new Map<string, { generation: number; lookup: Promise<LinkLookup> }>();
+  private generation = 0;
 
   constructor(private readonly m: Models) {}
 
-  /** The link state for a share id, read fresh. */
-  async lookup(id: string): Promise<LinkLookup> {
+  /**
+   * The link state for a share id, read fresh. A read already under way for the same id is shared,
+   * unless a link changed in this process since it began (see `linksChanged`): a reader never sees
+   * a state older than the revocation or expiry its own instance has answered.
+   */
+  lookup(id: string): Promise<LinkLookup> {
     const wanted = hashSnapshotId(id);
+    const shared = this.reading.get(wanted);
+    if (shared && shared.generation === this.generation) return shared.lookup;
+    const lookup = this.read(wanted).finally(() => {
+      if (this.reading.get(wanted)?.lookup === lookup) this.reading.delete(wanted);
+    });
+    this.reading.set(wanted, { generation: this.generation, lookup });
+    return lookup;
+  }
+
+  /** Called after a link is revoked or its expiry changes, so later lookups read the new state. */
+  linksChanged(): void {
+    this.generation++;
+  }
+
+  private async read(wanted: string): Promise<LinkLookup> {
     const row = await findLinkByHash(this.m, wanted);
     const stored = row ? Buffer.from(hashSnapshotId(row.snapshotId), 'hex') : NO_MATCH;
     const same = timingSafeEqual(stored, Buffer.from(wanted, 'hex'));
@@ -35,23 +57,23 @@ export class SnapshotReader {
     return { found: true, snapshotId: row.snapshotId, link: linkView(row) };
   }
 
-  /** The live link's state and the snapshot's serialized JSON; 404 for an unknown id, 410 once revoked or expired. */
-  async open(id: string): Promise<{ link: SnapshotLink; snapshotJson: string }> {
+  /** The live link's state and the snapshot's serialized JSON (UTF-8); 404 for an unknown id, 410 once revoked or expired. */
+  async open(id: string): Promise<{ link: SnapshotLink; snapshotBytes: Buffer }> {
     const found = await this.lookup(id);
     if (!found.found) throw new AppError('not_found', 'There is no shared snapshot at this link.');
     if (found.link.status !== 'live') throw goneError(found.link);
-    return { link: found.link, snapshotJson: await this.snapshotJson(found.snapshotId) };
+    return { link: found.link, snapshotBytes: await this.snapshotBytes(found.snapshotId) };
   }
 
-  /** The serialized public snapshot, from the cache or the database. */
-  async snapshotJson(snapshotId: string): Promise<string> {
+  /** The serialized public snapshot as UTF-8 JSON, from the cache or the database. */
+  async snapshotBytes(snapshotId: string): Promise<Buffer> {
     const cached = this.cache.get(snapshotId);
     if (cached !== undefined) return cached;
     const row = await loadSnapshotRow(this.m, snapshotId);
     if (!row) throw new AppError('not_found', 'There is no shared snapshot at this link.');
-    const json = JSON.stringify(publicSnapshot(row));
-    this.cache.set(snapshotId, json);
-    return json;
+    const bytes = Buffer.from(JSON.stringify(publicSnapshot(row)), 'utf8');
+    this.cache.set(snapshotId, bytes);
+    return bytes;
   }
 }
 

@@ -1,0 +1,31 @@
+import type { IncomingMessage, RequestListener, ServerResponse } from 'node:http';
+import type { Logger } from 'pino';
+import type { Models } from '../db/models';
+import { snapshotDataId, writeSnapshotData } from '../routes/snapshot-data';
+import { snapshotReader } from '../services/snapshots/read-snapshot';
+import { describeError } from './error-handler';
+import { trackRequest } from './request-id';
+
+/**
+ * The server's request listener: the read of a shared snapshot's data, which every holder of a
+ * published link makes and which needs no session, CSRF token, body or routing, is answered here
+ * with the app's own security headers, request id, log line and error shape; every other request
+ * goes to the Express app. Express's per-request work costs more than this whole read, so a link
+ * opened by many readers at once stays fast (measured by `npm run bench -- sharing`).
+ */
+export function frontDoor(app: RequestListener, deps: { m: Models; log: Logger; headers: Array<[string, string]> }): RequestListener {
+  const reader = snapshotReader(deps.m);
+  return (req: IncomingMessage, res: ServerResponse) => {
+    const id = snapshotDataId(req);
+    if (id === undefined) return void app(req, res);
+    for (const [name, value] of deps.headers) res.setHeader(name, value);
+    const requestId = trackRequest(deps.log, req, res, req.url ?? '');
+    writeSnapshotData(reader, id, req, res).catch((error: unknown) => {
+      const { status, body } = describeError(error, requestId, deps.log);
+      if (res.headersSent) return void res.destroy();
+      const text = JSON.stringify(body);
+      res.writeHead(status, { 'Content-Type': 'application/json; charset=utf-8', 'Content-Length': Buffer.byteLength(text) });
+      res.end(text);
+    });
+  };
+}
