@@ -32,16 +32,48 @@ export function newClaims(userId: string, sessionVersion: number): SessionClaims
   return { sub: userId, sid: randomUUID(), ver: sessionVersion };
 }
 
+/** The session cookie's value as sent (Auth.js splits a large one into .0, .1, … chunks), or undefined. */
+function sessionCookieValue(cookieHeader: string, name: string): string | undefined {
+  const parts: string[] = [];
+  for (const pair of cookieHeader.split(';')) {
+    const eq = pair.indexOf('=');
+    const key = pair.slice(0, eq).trim();
+    if (eq > 0 && (key === name || key.startsWith(`${name}.`))) parts.push(`${key}=${pair.slice(eq + 1).trim()}`);
+  }
+  return parts.length ? parts.sort().join(';') : undefined;
+}
+
+/** Sessions already opened, by secret and cookie value: at most this many, each until its JWT expires. */
+const OPENED_MAX = 10_000;
+const opened = new Map<string, { claims: SessionClaims; expiresAtMs: number }>();
+
 /**
  * Reads and decrypts the session cookie of a request (Auth.js JWT session: an encrypted JWT that
  * only AUTH_SECRET opens, so a session survives a restart). Only the cookie is looked at.
+ *
+ * Opening one costs a key derivation and an AES decryption, each a round trip to libuv's thread
+ * pool, on every request of a signed-in user; so a cookie that opened once is remembered (keyed by
+ * the secret and the exact cookie text) until its own expiry. Nothing is weakened: only cookies
+ * that decrypted are remembered, and the caller still checks the account and its session version
+ * in the database on every request.
  */
-export async function readSession(cookieHeader: string | undefined, s: SessionSettings): Promise<SessionClaims | null> {
+export async function readSession(cookieHeader: string | undefined, s: SessionSettings, nowMs = Date.now()): Promise<SessionClaims | null> {
   if (!cookieHeader) return null;
   const salt = sessionCookieName(s);
+  const value = sessionCookieValue(cookieHeader, salt);
+  if (!value) return null;
+  const key = `${s.secret}\0${value}`;
+  const known = opened.get(key);
+  if (known && known.expiresAtMs > nowMs) return known.claims;
+  if (known) opened.delete(key);
   const token = await getToken({ req: { headers: { cookie: cookieHeader } }, secret: s.secret, secureCookie: s.secureCookies, cookieName: salt, salt });
   if (!token || typeof token.sub !== 'string' || typeof token.sid !== 'string' || typeof token.ver !== 'number') return null;
-  return { sub: token.sub, sid: token.sid, ver: token.ver };
+  const claims = { sub: token.sub, sid: token.sid, ver: token.ver };
+  if (typeof token.exp === 'number') {
+    if (opened.size >= OPENED_MAX) opened.delete(opened.keys().next().value as string);
+    opened.set(key, { claims, expiresAtMs: token.exp * 1000 });
+  }
+  return claims;
 }
 
 /** Re-issues the session cookie with new claims, as Auth.js would (same name, flags and lifetime). */

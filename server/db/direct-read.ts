@@ -1,0 +1,68 @@
+import { QueryTypes } from 'sequelize';
+import type { Model, ModelStatic, Sequelize } from 'sequelize';
+
+interface SqliteReads {
+  all(sql: string, params: unknown[], cb: (err: Error | null, rows: unknown[]) => void): void;
+}
+
+/**
+ * Runs one SELECT outside any transaction and returns its rows as the driver gives them.
+ *
+ * On SQLite it goes straight to the driver's shared connection (the one Sequelize itself uses
+ * outside transactions): Sequelize's SQLite layer runs each query alone on that connection
+ * (`serialize`) and first asks `PRAGMA table_info` of every table a model query names, so each
+ * read costs two round trips to libuv's thread pool with the connection held, and a busy server's
+ * reads queue behind one another. PostgreSQL has a pool and none of this, so there the ordinary
+ * query layer is used. `?` marks each parameter in both.
+ */
+export async function readRows<T extends object>(sequelize: Sequelize, sql: string, params: unknown[]): Promise<T[]> {
+  if (sequelize.getDialect() !== 'sqlite') return sequelize.query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
+  const manager = sequelize.connectionManager as unknown as { getConnection(o: object): Promise<SqliteReads> };
+  const connection = await manager.getConnection({});
+  return new Promise((resolve, reject) => connection.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as T[]))));
+}
+
+/** The first row of readRows, or undefined. */
+export async function readRow<T extends object>(sequelize: Sequelize, sql: string, params: unknown[]): Promise<T | undefined> {
+  return (await readRows<T>(sequelize, sql, params))[0];
+}
+
+type Convert = (value: unknown) => unknown;
+
+const toDate: Convert = (v) => (v === null || v === undefined ? null : v instanceof Date ? v : new Date(String(v)));
+const toBoolean: Convert = (v) => (v === null || v === undefined ? null : v === true || v === 1 || v === '1' || v === 't');
+const toNumber: Convert = (v) => (v === null || v === undefined ? null : Number(v));
+const asIs: Convert = (v) => (v === undefined ? null : v);
+
+/** How a column's stored value becomes the model attribute's value, by the Sequelize data type's key. */
+function converterFor(typeKey: string): Convert {
+  if (typeKey === 'DATE') return toDate;
+  if (typeKey === 'BOOLEAN') return toBoolean;
+  if (typeKey === 'INTEGER' || typeKey === 'BIGINT' || typeKey === 'FLOAT' || typeKey === 'DOUBLE' || typeKey === 'REAL') return toNumber;
+  return asIs;
+}
+
+/** Reads a model's rows with plain SQL and gives them back as `row.get({ plain: true })` would. */
+export interface ModelReader<Row> {
+  /** `"alias"."column" AS "attribute"` for every attribute, for a SELECT list. */
+  columns: string;
+  /** Turns one raw row (selected with `columns`) into the model's plain row. */
+  toRow(raw: Record<string, unknown>): Row;
+}
+
+/** A ModelReader for `model`, its table named `alias` in the query. */
+export function modelReader<Row extends object>(model: ModelStatic<Model<Row, Partial<Row>>>, alias: string): ModelReader<Row> {
+  const declared = model.getAttributes() as Record<string, { field?: string; type: unknown }>;
+  const attributes = Object.entries(declared).map(([name, a]) => {
+    const type = a.type as { key?: string };
+    return { name, field: a.field ?? name, convert: converterFor(type.key ?? '') };
+  });
+  return {
+    columns: attributes.map((a) => `"${alias}"."${a.field}" AS "${a.name}"`).join(', '),
+    toRow(raw) {
+      const row: Record<string, unknown> = {};
+      for (const a of attributes) row[a.name] = a.convert(raw[a.name]);
+      return row as Row;
+    },
+  };
+}
