@@ -50,8 +50,18 @@ export interface ModelReader<Row> {
   toRow(raw: Record<string, unknown>): Row;
 }
 
-/** A ModelReader for `model`, its table named `alias` in the query. */
+const made = new WeakMap<object, Map<string, ModelReader<object>>>();
+
+/** A ModelReader for `model`, its table named `alias` in the query (made once per model and alias). */
 export function modelReader<Row extends object>(model: ModelStatic<Model<Row, Partial<Row>>>, alias: string): ModelReader<Row> {
+  let byAlias = made.get(model);
+  if (!byAlias) made.set(model, (byAlias = new Map()));
+  let reader = byAlias.get(alias) as ModelReader<Row> | undefined;
+  if (!reader) byAlias.set(alias, (reader = makeReader(model, alias)) as ModelReader<object>);
+  return reader;
+}
+
+function makeReader<Row extends object>(model: ModelStatic<Model<Row, Partial<Row>>>, alias: string): ModelReader<Row> {
   const declared = model.getAttributes() as Record<string, { field?: string; type: unknown }>;
   const attributes = Object.entries(declared).map(([name, a]) => {
     const type = a.type as { key?: string };

@@ -3,6 +3,7 @@ import { Op } from 'sequelize';
 import type { Transaction } from 'sequelize';
 import type { Scenario } from '../../src/contracts/scenario';
 import type { RevisionSummary, ScenarioRecord, ScenarioSummary } from '../../src/contracts/api/scenarios';
+import { modelReader, readRow } from '../db/direct-read';
 import type { Models } from '../db/models';
 import type { RevisionRow, ScenarioRow } from '../db/models/library';
 import { contains } from './like';
@@ -11,6 +12,16 @@ import { userNames } from './users';
 export type RevisionAction = RevisionSummary['action'];
 
 export async function findScenarioRow(m: Models, workspaceId: string, id: string, transaction?: Transaction): Promise<ScenarioRow | null> {
+  if (!transaction) {
+    // The most frequent read of a working session (open, result, revisions): plain SQL (see server/db/direct-read.ts).
+    const scenarios = modelReader(m.Scenario, 's');
+    const raw = await readRow<Record<string, unknown>>(
+      m.sequelize,
+      `SELECT ${scenarios.columns} FROM scenarios s WHERE s.workspace_id = ? AND s.id = ? AND s.deleted_at IS NULL`,
+      [workspaceId, id],
+    );
+    return raw ? scenarios.toRow(raw) : null;
+  }
   const row = await m.Scenario.findOne({ where: { workspaceId, id, deletedAt: null }, transaction });
   return row ? row.get({ plain: true }) : null;
 }

@@ -3,6 +3,7 @@ import { Op, QueryTypes } from 'sequelize';
 import type { Transaction } from 'sequelize';
 import type { SessionUser } from '../../src/contracts/api/account';
 import type { AdminUser } from '../../src/contracts/api/admin';
+import { modelReader, readRow } from '../db/direct-read';
 import type { Models } from '../db/models';
 import type { UserRow } from '../db/models/users';
 import { contains } from './like';
@@ -13,6 +14,12 @@ export function sessionUser(u: UserRow): SessionUser {
 }
 
 export async function findUserById(m: Models, id: string, transaction?: Transaction): Promise<UserRow | null> {
+  if (!transaction) {
+    // Every signed-in request reads its caller: plain SQL (see server/db/direct-read.ts).
+    const users = modelReader(m.User, 'u');
+    const raw = await readRow<Record<string, unknown>>(m.sequelize, `SELECT ${users.columns} FROM users u WHERE u.id = ?`, [id]);
+    return raw ? users.toRow(raw) : null;
+  }
   const row = await m.User.findByPk(id, { transaction });
   return row ? row.get({ plain: true }) : null;
 }

@@ -4,6 +4,7 @@ import type { Transaction } from 'sequelize';
 import type { MembershipSummary } from '../../src/contracts/api/account';
 import type { Role, UnitSystem } from '../../src/contracts/api/common';
 import type { Workspace } from '../../src/contracts/api/workspaces';
+import { modelReader, readRow } from '../db/direct-read';
 import type { Models } from '../db/models';
 import type { WorkspaceRow } from '../db/models/workspaces';
 
@@ -14,6 +15,16 @@ export interface MembershipWithWorkspace {
 }
 
 export async function findMembership(m: Models, workspaceId: string, userId: string, transaction?: Transaction): Promise<MembershipWithWorkspace | null> {
+  if (!transaction) {
+    // Every workspace route checks its caller's role: one plain-SQL read (see server/db/direct-read.ts).
+    const workspaces = modelReader(m.Workspace, 'w');
+    const raw = await readRow<Record<string, unknown>>(
+      m.sequelize,
+      `SELECT ${workspaces.columns}, me.role AS "memberRole" FROM workspaces w JOIN memberships me ON me.workspace_id = w.id WHERE w.id = ? AND me.user_id = ?`,
+      [workspaceId, userId],
+    );
+    return raw ? { workspace: workspaces.toRow(raw), role: raw.memberRole as Role } : null;
+  }
   const membership = await m.Membership.findOne({ where: { workspaceId, userId }, transaction });
   if (!membership) return null;
   const workspace = await m.Workspace.findByPk(workspaceId, { transaction });
