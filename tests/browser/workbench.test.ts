@@ -180,9 +180,17 @@ describe('the workbench in a browser', { timeout: 120_000 }, () => {
     await owner.page.goto(`${scenarioUrl}/history`);
     expect(await shown(owner.page.getByText('Revision 3', { exact: true }))).toBe(true);
     expect(await shown(owner.page.getByText('electricity.pricePerKwh'))).toBe(true);
-    await owner.page.getByRole('button', { name: 'Show' }).nth(1).click();
-    expect(await shown(owner.page.getByText('"title": "Test room, LED or sodium"'))).toBe(true);
+    // Revision 3 changed only the price: 0.2 before, 0.02 after (the previous story typed it).
+    await owner.page.getByRole('button', { name: 'Show' }).nth(0).click();
+    const changes = owner.page.getByRole('table', { name: 'Changes from revision 2' });
+    const price = changes.locator('tr[data-path="electricity.pricePerKwh"] td');
+    expect(await shown(price.nth(1))).toBe(true);
+    expect([await price.nth(0).innerText(), await price.nth(1).innerText()]).toEqual(['0.2', '0.02']);
+    expect(await shown(owner.page.getByRole('region', { name: 'Inputs of revision 3' }).getByText('Test room, LED or sodium'))).toBe(true);
     await owner.screenshot('18-history');
+    await owner.page.getByRole('button', { name: 'Show' }).nth(1).click();
+    await owner.page.getByText('The scenario file of this revision (JSON)').click();
+    expect(await shown(owner.page.getByText('"title": "Test room, LED or sodium"'))).toBe(true);
   });
 
   it('keeps typed input when someone else saved first, and saves it as the next revision on request', async () => {

@@ -10,10 +10,11 @@ import type { WorkspaceScope } from '../../../lib/workspace-context';
 import { useRevision } from '../api/get-revision';
 import { useRevisions } from '../api/get-revisions';
 import { useRestoreRevision } from '../api/restore-revision';
+import { RevisionReading } from './revision-reading';
 
 const ACTION_WORDS = { created: 'started', edited: 'changed', restored: 'brought back', duplicated: 'copied' } as const;
 
-/** Revisions newest first with the fields each changed; the chosen one's document can be read or restored. */
+/** Revisions newest first with the fields each changed; the chosen one can be read (what it changed, its inputs) or restored. */
 export function RevisionHistory({ scope, sid, onRestored }: { scope: WorkspaceScope; sid: string; onRestored: () => void }) {
   const list = useRevisions(scope.workspaceId, sid);
   const [chosen, setChosen] = useState<number | null>(null);
@@ -47,7 +48,7 @@ export function RevisionHistory({ scope, sid, onRestored }: { scope: WorkspaceSc
         {detail.isError ? <ErrorState error={detail.error} retry={() => void detail.refetch()} /> : null}
         {detail.data ? (
           <>
-            <pre className="figure max-h-[28rem] overflow-auto rounded bg-paper p-2 text-xs">{JSON.stringify(detail.data.revision.document, null, 2)}</pre>
+            <RevisionReading wid={scope.workspaceId} sid={sid} revision={detail.data.revision.revision} document={detail.data.revision.document} changedPaths={list.data.revisions.find((r) => r.revision === chosen)?.changedPaths ?? []} />
             {scope.canEdit && chosen !== newest ? (
               <Button className="mt-2" tone="primary" busy={restore.isPending} onClick={() => restore.mutate({ wid: scope.workspaceId, sid, rev: detail.data.revision.revision }, { onSuccess: onRestored })}>
                 Bring back revision {detail.data.revision.revision} as a new revision
