@@ -153,9 +153,10 @@ describe('links', () => {
   it('answers 410 once the expiry set by an editor has passed', async () => {
     const snap = await publish(d.editor, d.wid, d.sid, { expiresAt: new Date(Date.now() + 60_000).toISOString() });
     expect((await app.client().get(`/api/snapshots/${snap.id}`)).status).toBe(200);
-    const soon = new Date(Date.now() + 700).toISOString();
-    expect((await d.editor.patch(`/api/workspaces/${d.wid}/snapshots/${snap.id}`, { expiresAt: soon })).status).toBe(200);
-    await new Promise((r) => setTimeout(r, 900));
+    // Far enough ahead that the PATCH still names a future moment on a busy machine; then wait until just past it.
+    const soon = Date.now() + 2000;
+    expect((await d.editor.patch(`/api/workspaces/${d.wid}/snapshots/${snap.id}`, { expiresAt: new Date(soon).toISOString() })).status).toBe(200);
+    await new Promise((r) => setTimeout(r, Math.max(0, soon - Date.now()) + 100));
     const reply = await app.client().get(`/api/snapshots/${snap.id}`);
     expect(reply.status).toBe(410);
     expect(reply.body.error.fields).toEqual([{ path: 'link', message: 'expired' }]);
