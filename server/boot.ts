@@ -7,7 +7,7 @@ import { createRequestListener } from './app';
 import { ConfigError } from './config';
 import type { Config } from './config';
 import { publishedDemoPasswordsInUse } from './db/demo-accounts';
-import { openDatabase } from './db/connection';
+import { openConfiguredDatabase } from './db/connection';
 import { loadDemoOnce } from './db/demo';
 import { demoSteps } from './db/demo-steps';
 import { migrateUp } from './db/migrate';
@@ -27,7 +27,7 @@ export interface Running {
 
 /** Opens and migrates the database, loads the demo once, and listens. Used by index.ts and by tests. */
 export async function boot(config: Config, log: Logger, root = process.cwd()): Promise<Running> {
-  const sequelize = await openDatabase(config.databasePath);
+  const sequelize = await openConfiguredDatabase(config);
   const applied = await migrateUp(sequelize);
   if (applied.length) log.info({ applied }, 'migrations applied');
   const examples = loadExamples(join(root, 'scenarios'));

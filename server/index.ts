@@ -1,6 +1,6 @@
 import { boot } from './boot';
 import { buildClientIfNeeded } from './build-client';
-import { ConfigError, readConfig } from './config';
+import { ConfigError, describeDatabase, readConfig } from './config';
 import { createLogger } from './logger';
 
 const log = createLogger();
@@ -9,7 +9,7 @@ async function start(): Promise<void> {
   const config = readConfig();
   if (process.env.SKIP_CLIENT_BUILD !== '1' && (await buildClientIfNeeded(process.cwd()))) log.info('client built');
   const running = await boot(config, log);
-  log.info({ port: running.port, database: config.databasePath }, `Photon Parity is serving on http://localhost:${running.port}`);
+  log.info({ port: running.port, database: describeDatabase(config) }, `Photon Parity is serving on http://localhost:${running.port}`);
   for (const signal of ['SIGTERM', 'SIGINT'] as const) {
     process.once(signal, () => {
       log.info({ signal }, 'shutting down');

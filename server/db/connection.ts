@@ -2,6 +2,8 @@ import { accessSync, constants, mkdirSync } from 'node:fs';
 import { dirname } from 'node:path';
 import { Sequelize } from 'sequelize';
 import { ConfigError } from '../config';
+import type { Config } from '../config';
+import { openPostgres } from './postgres';
 import { serialiseTransactions } from './write-queue';
 
 /**
@@ -19,6 +21,11 @@ export const SQLITE_PRAGMAS = [
 
 interface SqliteConnection {
   exec(sql: string, cb: (err: Error | null) => void): void;
+}
+
+/** Opens the database the configuration names: PostgreSQL when DATABASE_URL is set, else the SQLite file. */
+export function openConfiguredDatabase(config: Pick<Config, 'databasePath' | 'databaseUrl'>): Promise<Sequelize> {
+  return config.databaseUrl ? openPostgres(config.databaseUrl) : openDatabase(config.databasePath);
 }
 
 /** Opens the embedded SQLite database (creating its folder) with the product's PRAGMAs. */

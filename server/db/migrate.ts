@@ -21,8 +21,36 @@ export function migrator(sequelize: Sequelize): Umzug<MigrationContext> {
 
 /** Applies every pending migration; returns the names applied. */
 export async function migrateUp(sequelize: Sequelize): Promise<string[]> {
-  const applied = await migrator(sequelize).up();
+  const applied = await oneMigratorAtATime(sequelize, () => migrator(sequelize).up());
   return applied.map((m) => m.name);
+}
+
+/** Any fixed number names the lock; this one spells "PP" and a version in hex. */
+const MIGRATION_LOCK = 0x5050_0001;
+
+interface PgClient {
+  query(sql: string): Promise<unknown>;
+}
+
+/**
+ * On PostgreSQL, several app instances may start at once against one database: a session-level
+ * advisory lock, held on a connection of its own, lets one migrate while the others wait and then
+ * find nothing pending (PostgreSQL documentation, "Advisory Locks"). SQLite has one writer anyway.
+ */
+async function oneMigratorAtATime<T>(sequelize: Sequelize, run: () => Promise<T>): Promise<T> {
+  if (sequelize.getDialect() !== 'postgres') return run();
+  const manager = sequelize.connectionManager as unknown as { getConnection(o?: object): Promise<PgClient>; releaseConnection(c: PgClient): Promise<void> };
+  const holder = await manager.getConnection();
+  try {
+    await holder.query(`SELECT pg_advisory_lock(${MIGRATION_LOCK})`);
+    try {
+      return await run();
+    } finally {
+      await holder.query(`SELECT pg_advisory_unlock(${MIGRATION_LOCK})`);
+    }
+  } finally {
+    await manager.releaseConnection(holder);
+  }
 }
 
 /**

@@ -8,7 +8,12 @@ if (!source) {
   process.exit(2);
 }
 try {
-  const { databasePath } = readConfig();
+  const { databasePath, databaseUrl } = readConfig();
+  if (databaseUrl) {
+    // This command copies the SQLite file only; PostgreSQL has its own tools for a consistent copy.
+    process.stderr.write('db:restore works on the SQLite file only; DATABASE_URL is set, so use PostgreSQL\'s own tool: pg_restore --clean --if-exists --dbname="$DATABASE_URL" FILE\n');
+    process.exit(2);
+  }
   const check = await restoreDatabase(source, databasePath);
   process.stdout.write(`restored ${source} into ${databasePath} (integrity ok, ${check.migrations.length} migrations)\n`);
 } catch (error) {

@@ -19,13 +19,14 @@ const pause = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 /**
  * Runs `attempt` again after SQLITE_BUSY or SQLITE_LOCKED with a growing, jittered pause, so a lock
  * held by another process (a backup, a migration CLI) is waited out instead of reaching a user.
+ * `retryable` picks the errors worth another try (PostgreSQL passes its own).
  */
-export async function retryWhenBusy<T>(attempt: () => Promise<T>, policy = BUSY_RETRY): Promise<T> {
+export async function retryWhenBusy<T>(attempt: () => Promise<T>, policy = BUSY_RETRY, retryable: (error: unknown) => boolean = isBusyError): Promise<T> {
   for (let n = 1; ; n++) {
     try {
       return await attempt();
     } catch (error) {
-      if (n >= policy.attempts || !isBusyError(error)) throw error;
+      if (n >= policy.attempts || !retryable(error)) throw error;
       const delay = Math.min(policy.maxDelayMs, policy.firstDelayMs * 2 ** (n - 1));
       await pause(delay / 2 + Math.random() * (delay / 2));
     }

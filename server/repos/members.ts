@@ -3,6 +3,7 @@ import type { Transaction } from 'sequelize';
 import type { Role } from '../../src/contracts/api/common';
 import type { Member } from '../../src/contracts/api/members';
 import type { Models } from '../db/models';
+import { orderNoCase } from './like';
 
 interface MemberQueryRow {
   user_id: string;
@@ -18,7 +19,7 @@ export async function listMembers(m: Models, workspaceId: string, transaction?: 
     `SELECT ms.user_id, u.name, u.email, ms.role, ms.created_at
        FROM memberships ms JOIN users u ON u.id = ms.user_id
       WHERE ms.workspace_id = :workspaceId
-      ORDER BY CASE ms.role WHEN 'owner' THEN 0 WHEN 'editor' THEN 1 ELSE 2 END, u.name COLLATE NOCASE`,
+      ORDER BY CASE ms.role WHEN 'owner' THEN 0 WHEN 'editor' THEN 1 ELSE 2 END, ${orderNoCase(m.sequelize, 'u.name')}`,
     { replacements: { workspaceId }, type: QueryTypes.SELECT, transaction },
   );
   return rows.map((r) => ({ userId: r.user_id, name: r.name, email: r.email, role: r.role, joinedAt: new Date(r.created_at).toISOString() }));

@@ -42,7 +42,7 @@ export async function scenarioRecord(m: Models, row: ScenarioRow, transaction?: 
 
 /** One page of a workspace's scenarios, newest change first; `q` matches the title. */
 export async function listScenarios(m: Models, workspaceId: string, q: string | undefined, page: number, pageSize: number): Promise<{ items: ScenarioSummary[]; total: number }> {
-  const where = { [Op.and]: [{ workspaceId, deletedAt: null }, ...(q ? [contains('title', q)] : [])] };
+  const where = { [Op.and]: [{ workspaceId, deletedAt: null }, ...(q ? [contains(m.sequelize, 'title', q)] : [])] };
   const { rows, count } = await m.Scenario.findAndCountAll({ where, order: [['updatedAt', 'DESC'], ['id', 'ASC']], limit: pageSize, offset: (page - 1) * pageSize });
   const plain = rows.map((r) => r.get({ plain: true }));
   const names = await userNames(m, plain.map((r) => r.updatedBy));

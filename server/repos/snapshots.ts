@@ -1,3 +1,4 @@
+import { QueryTypes } from 'sequelize';
 import type { Transaction } from 'sequelize';
 import type { Models } from '../db/models';
 import type { SnapshotForkRow, SnapshotLinkRow, SnapshotRow } from '../db/models/snapshots';
@@ -35,7 +36,9 @@ interface SqliteRead {
  * Reads one row on the driver's shared connection (the one Sequelize uses outside transactions),
  * skipping Sequelize's query layer: this runs on every public read of a share link.
  */
-async function readOne<T>(m: Models, sql: string, params: unknown[]): Promise<T | undefined> {
+async function readOne<T extends object>(m: Models, sql: string, params: unknown[]): Promise<T | undefined> {
+  // PostgreSQL has a pool rather than one shared connection: there the plain query layer is used.
+  if (m.sequelize.getDialect() !== 'sqlite') return (await m.sequelize.query<T>(sql, { replacements: params, type: QueryTypes.SELECT }))[0];
   const manager = m.sequelize.connectionManager as unknown as { getConnection(o: object): Promise<SqliteRead> };
   const connection = await manager.getConnection({});
   return new Promise((resolve, reject) => connection.get(sql, params, (err, row) => (err ? reject(err) : resolve(row as T | undefined))));

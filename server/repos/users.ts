@@ -72,7 +72,7 @@ export async function updateUser(m: Models, id: string, c: UserChanges, transact
 
 /** One page of accounts for site admins, matching `q` in e-mail or name. */
 export async function listUsers(m: Models, q: string | undefined, page: number, pageSize: number): Promise<{ items: AdminUser[]; total: number }> {
-  const where = q ? { [Op.or]: [contains('email', q), contains('name', q)] } : {};
+  const where = q ? { [Op.or]: [contains(m.sequelize, 'email', q), contains(m.sequelize, 'name', q)] } : {};
   const { rows, count } = await m.User.findAndCountAll({ where, order: [['email', 'ASC']], limit: pageSize, offset: (page - 1) * pageSize });
   const users = rows.map((r) => r.get({ plain: true }));
   const counts = await workspaceCounts(m, users.map((u) => u.id));

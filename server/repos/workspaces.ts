@@ -6,6 +6,7 @@ import type { Role, UnitSystem } from '../../src/contracts/api/common';
 import type { Workspace } from '../../src/contracts/api/workspaces';
 import { modelReader, readRow } from '../db/direct-read';
 import type { Models } from '../db/models';
+import { orderNoCase } from './like';
 import type { WorkspaceRow } from '../db/models/workspaces';
 
 /** A workspace and the caller's role in it. */
@@ -51,7 +52,7 @@ export async function listWorkspacesOf(m: Models, userId: string): Promise<Works
     `SELECT w.id, w.name, w.currency, w.unit_system, me.role, w.created_at, w.updated_at,
             (SELECT COUNT(*) FROM memberships x WHERE x.workspace_id = w.id) AS member_count
        FROM workspaces w JOIN memberships me ON me.workspace_id = w.id AND me.user_id = :userId
-      ORDER BY w.name COLLATE NOCASE, w.id`,
+      ORDER BY ${orderNoCase(m.sequelize, 'w.name')}, w.id`,
     { replacements: { userId }, type: QueryTypes.SELECT },
   );
   return rows.map((r) => ({

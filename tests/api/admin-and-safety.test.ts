@@ -68,18 +68,19 @@ describe('security headers', () => {
 
 describe('demo passwords in production', () => {
   it('refuse to start while a demo account still has its published password', async () => {
-    await app.close();
+    await app.running.close();
     const config = readConfig({
       NODE_ENV: 'production',
       PORT: '0',
       HOST: '127.0.0.1',
-      DATABASE_PATH: app.databasePath,
+      ...app.databaseEnv,
       AUTH_SECRET: 'a-production-secret-of-at-least-32-characters',
       SMTP_URL: 'smtp://127.0.0.1:9',
     });
     const started = boot(config, createLogger('silent'));
     await expect(started).rejects.toBeInstanceOf(ConfigError);
     await expect(started).rejects.toThrow(/published passwords/);
+    await app.close();
     app = await startTestApp();
   });
 });

@@ -11,6 +11,7 @@ import type { Models } from '../../server/db/models';
 import { createLogger } from '../../server/logger';
 import { ApiClient } from './api-client';
 import { MailReader } from './caught-mail';
+import { createTestDatabase, dropTestDatabase, onPostgres } from './test-database';
 
 /** Who the demo's people are, by their part. */
 export type DemoPart = 'owner' | 'editor' | 'viewer' | 'admin';
@@ -22,11 +23,17 @@ export function demoAccount(part: DemoPart): DemoAccount {
   return found;
 }
 
-/** A real server on a random port over a real SQLite file in a temp folder, with the real fake SMTP server. */
+/**
+ * A real server on a random port over a real SQLite file in a temp folder (or, with
+ * TEST_DATABASE_URL, a fresh PostgreSQL database of its own), with the real fake SMTP server.
+ */
 export interface TestApp {
   base: string;
   dir: string;
+  /** The SQLite file; unused on PostgreSQL. */
   databasePath: string;
+  /** The settings that point another server at this app's database (DATABASE_PATH or DATABASE_URL). */
+  databaseEnv: Record<string, string>;
   running: Running;
   m: Models;
   mail: MailReader;
@@ -51,13 +58,22 @@ export const TEST_PASSWORD = 'a-test-password-of-length';
 export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'pp-api-'));
   const databasePath = join(dir, 'test.sqlite');
-  const config = () => readConfig({ NODE_ENV: 'test', PORT: '0', HOST: '127.0.0.1', DATABASE_PATH: databasePath, ...env });
+  const pg = onPostgres ? await createTestDatabase() : undefined;
+  const databaseEnv: Record<string, string> = pg ? { DATABASE_URL: pg.url } : { DATABASE_PATH: databasePath };
+  const config = () => readConfig({ NODE_ENV: 'test', PORT: '0', HOST: '127.0.0.1', DATABASE_PATH: databasePath, ...databaseEnv, ...env });
   const log = createLogger(process.env.TEST_LOG_LEVEL ?? 'silent');
-  let running = await boot(config(), log);
+  let running: Running;
+  try {
+    running = await boot(config(), log);
+  } catch (error) {
+    if (pg) await dropTestDatabase(pg.name);
+    throw error;
+  }
   const app: TestApp = {
     base: `http://127.0.0.1:${running.port}`,
     dir,
     databasePath,
+    databaseEnv,
     running,
     m: models(running.sequelize),
     mail: new MailReader(running.sequelize),
@@ -86,7 +102,10 @@ export async function startTestApp(env: Record<string, string> = {}): Promise<Te
       app.mail = new MailReader(running.sequelize);
       for (const c of clients) c.base = app.base;
     },
-    close: () => running.close(),
+    async close() {
+      await running.close();
+      if (pg) await dropTestDatabase(pg.name);
+    },
   };
   return app;
 }

@@ -1,6 +1,7 @@
 import { DataTypes } from 'sequelize';
 import type { MigrationFn } from 'umzug';
 import type { MigrationContext } from '../migrate';
+import { allowUpdates, refuseUpdates } from '../refuse-updates';
 
 const userRef = { type: DataTypes.STRING(64), allowNull: false, references: { model: 'users', key: 'id' } };
 const workspaceRef = {
@@ -73,13 +74,10 @@ export const up: MigrationFn<MigrationContext> = async ({ context: { queryInterf
     created_at: { type: DataTypes.DATE, allowNull: false },
   });
   await queryInterface.addIndex('scenario_revisions', ['scenario_id', 'revision'], { unique: true });
-  await sequelize.query(
-    `CREATE TRIGGER scenario_revisions_append_only BEFORE UPDATE ON scenario_revisions
-     BEGIN SELECT RAISE(ABORT, 'scenario revisions are append-only'); END`,
-  );
+  await refuseUpdates(sequelize, 'scenario_revisions', 'scenario_revisions_append_only', 'scenario revisions are append-only');
 };
 
 export const down: MigrationFn<MigrationContext> = async ({ context: { queryInterface, sequelize } }) => {
-  await sequelize.query('DROP TRIGGER IF EXISTS scenario_revisions_append_only');
+  await allowUpdates(sequelize, 'scenario_revisions', 'scenario_revisions_append_only');
   for (const table of ['scenario_revisions', 'scenarios', 'fixtures']) await queryInterface.dropTable(table);
 };

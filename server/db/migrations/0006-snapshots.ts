@@ -1,6 +1,7 @@
 import { DataTypes } from 'sequelize';
 import type { MigrationFn } from 'umzug';
 import type { MigrationContext } from '../migrate';
+import { allowUpdates, refuseUpdates } from '../refuse-updates';
 
 const text = (allowNull = false) => ({ type: DataTypes.TEXT, allowNull });
 
@@ -32,10 +33,7 @@ export const up: MigrationFn<MigrationContext> = async ({ context: { queryInterf
   });
   await queryInterface.addIndex('snapshots', ['workspace_id', 'created_at']);
   await queryInterface.addIndex('snapshots', ['scenario_id']);
-  await sequelize.query(
-    `CREATE TRIGGER snapshots_immutable BEFORE UPDATE ON snapshots
-     BEGIN SELECT RAISE(ABORT, 'snapshots are immutable'); END`,
-  );
+  await refuseUpdates(sequelize, 'snapshots', 'snapshots_immutable', 'snapshots are immutable');
 
   await queryInterface.createTable('snapshot_links', {
     snapshot_id: { type: DataTypes.STRING(21), primaryKey: true, references: { model: 'snapshots', key: 'id' }, onDelete: 'CASCADE' },
@@ -56,6 +54,6 @@ export const up: MigrationFn<MigrationContext> = async ({ context: { queryInterf
 };
 
 export const down: MigrationFn<MigrationContext> = async ({ context: { queryInterface, sequelize } }) => {
-  await sequelize.query('DROP TRIGGER IF EXISTS snapshots_immutable');
+  await allowUpdates(sequelize, 'snapshots', 'snapshots_immutable');
   for (const table of ['snapshot_forks', 'snapshot_links', 'snapshots']) await queryInterface.dropTable(table);
 };
