@@ -1,5 +1,4 @@
 import { existsSync } from 'node:fs';
-import type { RequestListener } from 'node:http';
 import { join } from 'node:path';
 import express from 'express';
 import type { Logger } from 'pino';
@@ -8,6 +7,7 @@ import type { Config } from './config';
 import type { Example } from './examples';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { frontDoor } from './http/front-door';
+import type { DrainableListener } from './http/front-door';
 import { requestIds } from './http/request-id';
 import { recordHeaders, securityHeaders } from './http/security-headers';
 import { rateLimits } from './http/rate-limits';
@@ -70,7 +70,7 @@ export function createApp(deps: AppDeps): express.Express {
  * The app as the server's request listener: createApp behind the front door that answers shared
  * snapshot reads directly (server/http/front-door.ts).
  */
-export function createRequestListener(deps: AppDeps): RequestListener {
+export function createRequestListener(deps: AppDeps): DrainableListener {
   return frontDoor(createApp(deps), { m: models(deps.sequelize), log: deps.log, headers: recordHeaders(securityHeaders(deps.config)) });
 }
 

@@ -44,7 +44,8 @@ export async function boot(config: Config, log: Logger, root = process.cwd()): P
   const fakeSmtp = config.smtpUrl ? undefined : await startFakeSmtp(sequelize, log);
   if (fakeSmtp && config.production) log.warn('SMTP_URL is not set: e-mail is caught by the local fake server and never delivered');
   const mailer = createMailer(config.smtpUrl ?? fakeSmtp?.url ?? '');
-  const server = createServer(createRequestListener({ config, sequelize, log, examples, clientDir: join(root, 'dist'), mailer }));
+  const listener = createRequestListener({ config, sequelize, log, examples, clientDir: join(root, 'dist'), mailer });
+  const server = createServer(listener);
   server.listen(config.port, config.host);
   await new Promise<void>((resolve, reject) => {
     server.once('listening', resolve);
@@ -57,6 +58,7 @@ export async function boot(config: Config, log: Logger, root = process.cwd()): P
   const close = () =>
     (closing ??= (async () => {
       // Finish requests already in flight, refuse new ones, then close the database.
+      listener.drain();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       mailer.close();
       await fakeSmtp?.close();

@@ -6,6 +6,9 @@ import { snapshotReader } from '../services/snapshots/read-snapshot';
 import { describeError } from './error-handler';
 import { trackRequest } from './request-id';
 
+/** A request listener that can be told the server is shutting down. */
+export type DrainableListener = RequestListener & { drain(): void };
+
 /**
  * The server's request listener: the read of a shared snapshot's data, which every holder of a
  * published link makes and which needs no session, CSRF token, body or routing, is answered here
@@ -13,9 +16,19 @@ import { trackRequest } from './request-id';
  * goes to the Express app. Express's per-request work costs more than this whole read, so a link
  * opened by many readers at once stays fast (measured by `npm run bench -- sharing`).
  */
-export function frontDoor(app: RequestListener, deps: { m: Models; log: Logger; headers: Array<[string, string]> }): RequestListener {
+export function frontDoor(app: RequestListener, deps: { m: Models; log: Logger; headers: Array<[string, string]> }): DrainableListener {
   const reader = snapshotReader(deps.m);
-  return (req: IncomingMessage, res: ServerResponse) => {
+  // Once shutting down, each answer closes its connection, those in flight included: a keep-alive
+  // client goes elsewhere instead of sending more requests to a server about to close its database.
+  let draining = false;
+  const answering = new Set<ServerResponse>();
+  const closeAfter = (res: ServerResponse) => void (res.headersSent || res.setHeader('Connection', 'close'));
+  const listener = (req: IncomingMessage, res: ServerResponse) => {
+    if (draining) closeAfter(res);
+    else {
+      answering.add(res);
+      res.once('close', () => answering.delete(res));
+    }
     const id = snapshotDataId(req);
     if (id === undefined) return void app(req, res);
     for (const [name, value] of deps.headers) res.setHeader(name, value);
@@ -28,4 +41,9 @@ export function frontDoor(app: RequestListener, deps: { m: Models; log: Logger; 
       res.end(text);
     });
   };
+  const drain = () => {
+    draining = true;
+    answering.forEach(closeAfter);
+  };
+  return Object.assign(listener, { drain });
 }
