@@ -48,7 +48,7 @@ export function retryConflictingTransactions(sequelize: Sequelize): void {
   };
 }
 
-/** Connects to PostgreSQL at `url`; fails fast with a plain message when the server cannot be reached. */
+/** Connects to PostgreSQL at `url`; fails fast with a plain message when the server cannot be reached or refuses the login. */
 export async function openPostgres(url: string): Promise<Sequelize> {
   const sequelize = new Sequelize(url, {
     dialect: 'postgres',
@@ -66,8 +66,8 @@ export async function openPostgres(url: string): Promise<Sequelize> {
   } catch (error) {
     await sequelize.close().catch(() => undefined);
     const cause = error as { parent?: { code?: string; message?: string }; message?: string };
-    const reason = cause.parent?.code ?? cause.parent?.message ?? cause.message ?? String(error);
-    throw new ConfigError(`PostgreSQL at ${describeDatabase({ databasePath: '', databaseUrl: url })} cannot be reached (${reason}); check DATABASE_URL and that the server is running`);
+    const reason = cause.parent?.message || cause.parent?.code || cause.message || String(error);
+    throw new ConfigError(`PostgreSQL at ${describeDatabase({ databasePath: '', databaseUrl: url })} cannot be opened (${reason}); check DATABASE_URL and that the server is running`);
   }
   retryConflictingTransactions(sequelize);
   return sequelize;
