@@ -20,10 +20,9 @@ function stale(current: number, sent: number): AppError {
 
 /** Stores a new scenario at revision 1. */
 export async function createScenario(m: Models, workspaceId: string, document: Scenario, userId: string): Promise<ScenarioRecord> {
-  return m.sequelize.transaction(async (t) => {
-    const row = await insertScenario(m, workspaceId, document, userId, { action: 'created', fromRevision: null }, t);
-    return scenarioRecord(m, row, t);
-  });
+  // The record (with the author's name) is read after the commit: writes queue behind one another, so a transaction holds only what must be atomic.
+  const row = await m.sequelize.transaction((t) => insertScenario(m, workspaceId, document, userId, { action: 'created', fromRevision: null }, t));
+  return scenarioRecord(m, row);
 }
 
 async function advance(
@@ -36,18 +35,19 @@ async function advance(
   action: RevisionAction,
   fromRevision: number | null,
 ): Promise<ScenarioRecord> {
-  return m.sequelize.transaction(async (t) => {
+  const saved = await m.sequelize.transaction(async (t) => {
     const row = await findScenarioRow(m, workspaceId, id, t);
     if (!row) throw notFound();
     const base = expected ?? row.revision;
     if (base !== row.revision) throw stale(row.revision, base);
     const paths = changedPaths(JSON.parse(row.document), document);
-    if (paths.length === 0 && action === 'edited') return scenarioRecord(m, row, t);
+    if (paths.length === 0 && action === 'edited') return row;
     const next = await advanceScenario(m, row, base, document, userId, t);
     if (!next) throw stale(row.revision + 1, base);
     await appendRevision(m, { scenarioId: id, revision: next.revision, document, action, changedPaths: paths, fromRevision, userId }, t);
-    return scenarioRecord(m, next, t);
+    return next;
   });
+  return scenarioRecord(m, saved);
 }
 
 /**
@@ -68,12 +68,12 @@ export async function restoreRevision(m: Models, workspaceId: string, id: string
 
 /** Copies the current document into a new scenario in the same workspace. */
 export async function duplicateScenario(m: Models, workspaceId: string, id: string, title: string | undefined, userId: string): Promise<ScenarioRecord> {
-  return m.sequelize.transaction(async (t) => {
+  const copy = await m.sequelize.transaction(async (t) => {
     const row = await findScenarioRow(m, workspaceId, id, t);
     if (!row) throw notFound();
     const source = JSON.parse(row.document) as Scenario;
     const document: Scenario = { ...source, title: title ?? `${source.title} (copy)`.slice(0, 200) };
-    const copy = await insertScenario(m, workspaceId, document, userId, { action: 'duplicated', fromRevision: row.revision }, t);
-    return scenarioRecord(m, copy, t);
+    return insertScenario(m, workspaceId, document, userId, { action: 'duplicated', fromRevision: row.revision }, t);
   });
+  return scenarioRecord(m, copy);
 }
