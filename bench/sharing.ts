@@ -75,6 +75,7 @@ export const sharingSuite: BenchSuite = {
       const id = await publishDemoSnapshot(server.base);
       const snapshotUrl = `${server.base}/api/snapshots/${id}`;
       const unknownUrl = `${server.base}/api/snapshots/${id.slice(0, 20)}${id.endsWith('x') ? 'y' : 'x'}`;
+      const bytes = (await (await fetch(snapshotUrl)).arrayBuffer()).byteLength;
       await load(snapshotUrl, 2);
       await load(`${server.base}/api/health`, 2);
       const health = await load(`${server.base}/api/health`);
@@ -86,7 +87,7 @@ export const sharingSuite: BenchSuite = {
       const page = await publicPageScriptBytes(`${server.base}/s/${id}`);
       const ratio = snapshot.requests.average / health.requests.average;
       const rows: BenchRow[] = [
-        { name: `GET snapshot data, ${CONNECTIONS} connections: p99`, value: snapshot.latency.p99, unit: 'ms', target: 20, direction: 'below', note: `mean ${snapshot.latency.average.toFixed(2)} ms, ${snapshot.non2xx} non-2xx, ${snapshot.errors} errors` },
+        { name: `GET snapshot data, ${CONNECTIONS} connections: p99`, value: snapshot.latency.p99, unit: 'ms', target: 20, direction: 'below', note: `mean ${snapshot.latency.average.toFixed(2)} ms, ${snapshot.non2xx} non-2xx, ${snapshot.errors} errors; body ${bytes} bytes` },
         { name: 'GET snapshot data: throughput', value: snapshot.requests.average, unit: 'req/s' },
         { name: 'GET snapshot data: server CPU per request', value: cpuPerRequest, unit: 'ms', note: `machine load average ${loadavg()[0]!.toFixed(1)} on ${cpus().length} CPUs` },
         { name: 'GET /api/health (same run): throughput', value: health.requests.average, unit: 'req/s', note: `p99 ${health.latency.p99} ms` },

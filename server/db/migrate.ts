@@ -1,4 +1,4 @@
-import { QueryTypes } from 'sequelize';
+import { readRows } from './direct-read';
 import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import { migrations } from './migrations';
@@ -59,7 +59,7 @@ async function oneMigratorAtATime<T>(sequelize: Sequelize, run: () => Promise<T>
  * which is DDL on a hot path).
  */
 export async function migrationState(sequelize: Sequelize): Promise<{ applied: number; pending: number }> {
-  const rows = await sequelize.query<{ name: string }>('SELECT name FROM "SequelizeMeta"', { type: QueryTypes.SELECT });
+  const rows = await readRows<{ name: string }>(sequelize, 'SELECT name FROM "SequelizeMeta"', []);
   const applied = new Set(rows.map((r) => r.name));
   return { applied: applied.size, pending: migrations.filter((m) => !applied.has(m.name)).length };
 }

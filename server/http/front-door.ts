@@ -1,7 +1,7 @@
 import type { IncomingMessage, RequestListener, ServerResponse } from 'node:http';
 import type { Logger } from 'pino';
 import type { Models } from '../db/models';
-import { snapshotDataId, writeSnapshotData } from '../routes/snapshot-data';
+import { snapshotDataId, snapshotReply } from '../routes/snapshot-data';
 import { snapshotReader } from '../services/snapshots/read-snapshot';
 import { describeError } from './error-handler';
 import { trackRequest } from './request-id';
@@ -18,6 +18,7 @@ export type DrainableListener = RequestListener & { drain(): void };
  */
 export function frontDoor(app: RequestListener, deps: { m: Models; log: Logger; headers: Array<[string, string]> }): DrainableListener {
   const reader = snapshotReader(deps.m);
+  const security = deps.headers.flat();
   // Once shutting down, each answer closes its connection, those in flight included: a keep-alive
   // client goes elsewhere instead of sending more requests to a server about to close its database.
   let draining = false;
@@ -31,15 +32,21 @@ export function frontDoor(app: RequestListener, deps: { m: Models; log: Logger; 
     }
     const id = snapshotDataId(req);
     if (id === undefined) return void app(req, res);
-    for (const [name, value] of deps.headers) res.setHeader(name, value);
-    const requestId = trackRequest(deps.log, req, res, req.url ?? '');
-    writeSnapshotData(reader, id, req, res).catch((error: unknown) => {
-      const { status, body } = describeError(error, requestId, deps.log);
-      if (res.headersSent) return void res.destroy();
-      const text = JSON.stringify(body);
-      res.writeHead(status, { 'Content-Type': 'application/json; charset=utf-8', 'Content-Length': Buffer.byteLength(text) });
-      res.end(text);
-    });
+    const requestId = trackRequest(deps.log, req, res, req.url ?? '', { setHeader: false });
+    // One list of headers given to writeHead: Node writes it as it is, without the per-header work of setHeader.
+    const head = [...security, 'X-Request-Id', requestId];
+    snapshotReply(reader, id, req).then(
+      (reply) => {
+        res.writeHead(reply.status, [...head, ...reply.headers]);
+        res.end(reply.body ?? undefined);
+      },
+      (error: unknown) => {
+        const { status, body } = describeError(error, requestId, deps.log);
+        const text = JSON.stringify(body);
+        res.writeHead(status, [...head, 'Content-Type', 'application/json; charset=utf-8', 'Content-Length', String(Buffer.byteLength(text))]);
+        res.end(text);
+      },
+    );
   };
   const drain = () => {
     draining = true;

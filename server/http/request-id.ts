@@ -9,13 +9,15 @@ export function loggedPath(url: string): string {
 }
 
 /**
- * Gives a request an id (echoed in the X-Request-Id header and in error bodies) and logs one line
- * when it finishes, with method, path, status and duration; never headers or bodies.
+ * Gives a request an id (echoed in the X-Request-Id header, unless the caller writes it itself, and
+ * in error bodies) and logs one line when it finishes, with method, path, status and duration;
+ * never headers or bodies.
  */
-export function trackRequest(log: Logger, req: IncomingMessage, res: ServerResponse, url: string): string {
+export function trackRequest(log: Logger, req: IncomingMessage, res: ServerResponse, url: string, { setHeader = true } = {}): string {
   const id = randomUUID();
   (req as { id?: string }).id = id;
-  res.setHeader('X-Request-Id', id);
+  if (setHeader) res.setHeader('X-Request-Id', id);
+  if (!log.isLevelEnabled('info')) return id;
   const start = process.hrtime.bigint();
   res.on('finish', () => {
     const ms = Number(process.hrtime.bigint() - start) / 1e6;

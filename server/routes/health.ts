@@ -1,18 +1,16 @@
 import { Router } from 'express';
-import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize';
 import { ENGINE_VERSION } from '../../src/engine/version';
 import type { AppDeps } from '../app';
 import type { DatabaseState } from '../db/connection';
+import { readRow } from '../db/direct-read';
 import { migrationState } from '../db/migrate';
 
 async function databaseState(sequelize: Sequelize): Promise<DatabaseState> {
   const dialect = sequelize.getDialect();
   try {
-    const journalMode =
-      dialect === 'sqlite'
-        ? (await sequelize.query<{ journal_mode: string }>('PRAGMA journal_mode', { type: QueryTypes.SELECT }))[0]?.journal_mode
-        : undefined;
+    // Probes call this often (a load balancer, every few seconds per instance): plain reads, see server/db/direct-read.ts.
+    const journalMode = dialect === 'sqlite' ? (await readRow<{ journal_mode: string }>(sequelize, 'PRAGMA journal_mode', []))?.journal_mode : undefined;
     const migrations = await migrationState(sequelize);
     return { ok: migrations.pending === 0, dialect, journalMode, migrations };
   } catch {

@@ -1,8 +1,9 @@
-import type { IncomingMessage, ServerResponse } from 'node:http';
+import type { IncomingMessage } from 'node:http';
 import type { RequestHandler } from 'express';
 import type { Models } from '../db/models';
 import { snapshotReader } from '../services/snapshots/read-snapshot';
 import type { SnapshotReader } from '../services/snapshots/read-snapshot';
+import { SizedLru } from '../services/snapshots/lru-cache';
 
 /** GET /api/snapshots/<id> with an optional trailing slash and query; ids are checked as idParam does. */
 const PATH = /^\/api\/snapshots\/([A-Za-z0-9_-]{1,64})\/?(?:\?.*)?$/;
@@ -21,29 +22,41 @@ function notModified(req: IncomingMessage, etag: string): boolean {
   return header.trim() === '*' || header.split(',').some((tag) => tag.trim().replace(/^W\//, '') === etag);
 }
 
+/** Whole reply bodies by entity tag (the snapshot with its link's state), up to this many bytes per reader. */
+const BODY_CACHE_BYTES = 16 * 1024 * 1024;
+const bodies = new WeakMap<SnapshotReader, SizedLru<Buffer>>();
+
+/** The body for this entity tag, made once while it stays in the cache: a busy link allocates nothing per request. */
+function bodyOf(reader: SnapshotReader, etag: string, make: () => Buffer): Buffer {
+  let cache = bodies.get(reader);
+  if (!cache) bodies.set(reader, (cache = new SizedLru<Buffer>(BODY_CACHE_BYTES)));
+  let body = cache.get(etag);
+  if (!body) cache.set(etag, (body = make()));
+  return body;
+}
+
+/** A reply ready to write: its status, its headers as a flat name, value, name, value… list, and its body. */
+export interface SnapshotReply {
+  status: 200 | 304;
+  headers: string[];
+  /** null for 304 and for HEAD */
+  body: Buffer | null;
+}
+
 /**
- * Answers GET /api/snapshots/:id: the link's state and the snapshot, written from the cached bytes
- * without copying them; rejects with the AppError for an unknown (404), withdrawn or expired (410)
+ * The answer to GET /api/snapshots/:id: the link's state and the snapshot, or 304 when the client
+ * holds it already; rejects with the AppError for an unknown (404), withdrawn or expired (410)
  * link. Anyone with the link may read it and a GET changes nothing, so no session is needed.
  */
-export async function writeSnapshotData(reader: SnapshotReader, id: string, req: IncomingMessage, res: ServerResponse): Promise<void> {
+export async function snapshotReply(reader: SnapshotReader, id: string, req: IncomingMessage): Promise<SnapshotReply> {
   const { link, snapshotBytes } = await reader.open(id);
   // The snapshot never changes, so the link's state alone tells one reply from another.
   const etag = `"${id}.${link.status}.${link.expiresAt ?? ''}"`;
-  res.setHeader('Cache-Control', 'private, no-cache');
-  res.setHeader('ETag', etag);
-  if (notModified(req, etag)) {
-    res.statusCode = 304;
-    return void res.end();
-  }
-  const head = Buffer.from(`{"link":${JSON.stringify(link)},"snapshot":`, 'utf8');
-  res.setHeader('Content-Type', 'application/json; charset=utf-8');
-  res.setHeader('Content-Length', head.length + snapshotBytes.length + CLOSE.length);
-  if (req.method === 'HEAD') return void res.end();
-  res.cork();
-  res.write(head);
-  res.write(snapshotBytes);
-  res.end(CLOSE);
+  const caching = ['Cache-Control', 'private, no-cache', 'ETag', etag];
+  if (notModified(req, etag)) return { status: 304, headers: caching, body: null };
+  const body = bodyOf(reader, etag, () => Buffer.concat([Buffer.from(`{"link":${JSON.stringify(link)},"snapshot":`, 'utf8'), snapshotBytes, CLOSE]));
+  const headers = [...caching, 'Content-Type', 'application/json; charset=utf-8', 'Content-Length', String(body.length)];
+  return { status: 200, headers, body: req.method === 'HEAD' ? null : body };
 }
 
 /** The same read as Express middleware, for an app used without the front door (see server/http/front-door.ts). */
@@ -52,6 +65,9 @@ export function snapshotDataRoute(m: Models): RequestHandler {
   return (req, res, next) => {
     const id = snapshotDataId(req);
     if (id === undefined) return next();
-    writeSnapshotData(reader, id, req, res).catch(next);
+    snapshotReply(reader, id, req).then((reply) => {
+      res.writeHead(reply.status, reply.headers);
+      res.end(reply.body ?? undefined);
+    }, next);
   };
 }
