@@ -1,4 +1,5 @@
 import type { IncomingMessage, RequestListener, ServerResponse } from 'node:http';
+import type { Socket } from 'node:net';
 import type { Logger } from 'pino';
 import type { Models } from '../db/models';
 import { snapshotDataId, snapshotReply } from '../routes/snapshot-data';
@@ -21,14 +22,15 @@ export function frontDoor(app: RequestListener, deps: { m: Models; log: Logger; 
   const security = deps.headers.flat();
   // Once shutting down, each answer closes its connection, those in flight included: a keep-alive
   // client goes elsewhere instead of sending more requests to a server about to close its database.
+  // Connections (not requests) are tracked, so a busy keep-alive connection costs nothing per request.
   let draining = false;
-  const answering = new Set<ServerResponse>();
-  const closeAfter = (res: ServerResponse) => void (res.headersSent || res.setHeader('Connection', 'close'));
+  const connections = new Set<Socket>();
   const listener = (req: IncomingMessage, res: ServerResponse) => {
-    if (draining) closeAfter(res);
-    else {
-      answering.add(res);
-      res.once('close', () => answering.delete(res));
+    if (draining) res.setHeader('Connection', 'close');
+    else if (!connections.has(req.socket)) {
+      const socket = req.socket;
+      connections.add(socket);
+      socket.once('close', () => connections.delete(socket));
     }
     const id = snapshotDataId(req);
     if (id === undefined) return void app(req, res);
@@ -50,7 +52,12 @@ export function frontDoor(app: RequestListener, deps: { m: Models; log: Logger; 
   };
   const drain = () => {
     draining = true;
-    answering.forEach(closeAfter);
+    for (const socket of connections) {
+      // The response a connection is answering now: Node's own link from socket to response, the one
+      // graceful-shutdown libraries read too; absent between requests.
+      const res = (socket as Socket & { _httpMessage?: ServerResponse | null })._httpMessage;
+      if (res && !res.headersSent) res.setHeader('Connection', 'close');
+    }
   };
   return Object.assign(listener, { drain });
 }
