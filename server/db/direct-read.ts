@@ -5,21 +5,60 @@ interface SqliteReads {
   all(sql: string, params: unknown[], cb: (err: Error | null, rows: unknown[]) => void): void;
 }
 
+/** At most this many plain reads wait on libuv's thread pool at once (it has 4 threads, shared with writes). */
+const READS_AT_ONCE = 2;
+
+interface ReadLane {
+  connection: Promise<SqliteReads>;
+  active: number;
+  waiting: Array<() => void>;
+}
+
+const lanes = new WeakMap<Sequelize, ReadLane>();
+
+/**
+ * The connection plain reads use: one of their own, opened through Sequelize's connection manager
+ * (so it gets the product's PRAGMAs and is closed with the others). Not Sequelize's shared one:
+ * Sequelize runs its queries there in `serialize` mode, and the driver starts a serialized query
+ * only once nothing else is pending on that connection, so a steady stream of plain reads on it
+ * would hold Sequelize's queries back for as long as the stream lasts.
+ */
+function laneOf(sequelize: Sequelize): ReadLane {
+  let lane = lanes.get(sequelize);
+  if (!lane) {
+    const manager = sequelize.connectionManager as unknown as { getConnection(o: object): Promise<SqliteReads> };
+    const connection = manager.getConnection({ uuid: 'plain-reads' });
+    lane = { connection, active: 0, waiting: [] };
+    lanes.set(sequelize, lane);
+    // A connection that failed to open is tried again by the next read.
+    connection.catch(() => lanes.delete(sequelize));
+  }
+  return lane;
+}
+
 /**
  * Runs one SELECT outside any transaction and returns its rows as the driver gives them.
  *
- * On SQLite it goes straight to the driver's shared connection (the one Sequelize itself uses
- * outside transactions): Sequelize's SQLite layer runs each query alone on that connection
- * (`serialize`) and first asks `PRAGMA table_info` of every table a model query names, so each
- * read costs two round trips to libuv's thread pool with the connection held, and a busy server's
- * reads queue behind one another. PostgreSQL has a pool and none of this, so there the ordinary
- * query layer is used. `?` marks each parameter in both.
+ * On SQLite it goes straight to the driver, on a connection of its own: Sequelize's SQLite layer
+ * runs each query alone on its shared connection (`serialize`) and first asks `PRAGMA table_info`
+ * of every table a model query names, so each read costs two round trips to libuv's thread pool
+ * with the connection held, and a busy server's reads queue behind one another. Only a few plain
+ * reads are handed to the thread pool at a time, so writes still find a free thread. PostgreSQL
+ * has a pool and none of this, so there the ordinary query layer is used. `?` marks each parameter
+ * in both.
  */
 export async function readRows<T extends object>(sequelize: Sequelize, sql: string, params: unknown[]): Promise<T[]> {
   if (sequelize.getDialect() !== 'sqlite') return sequelize.query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
-  const manager = sequelize.connectionManager as unknown as { getConnection(o: object): Promise<SqliteReads> };
-  const connection = await manager.getConnection({});
-  return new Promise((resolve, reject) => connection.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as T[]))));
+  const lane = laneOf(sequelize);
+  if (lane.active >= READS_AT_ONCE) await new Promise<void>((resolve) => lane.waiting.push(resolve));
+  lane.active++;
+  try {
+    const connection = await lane.connection;
+    return await new Promise<T[]>((resolve, reject) => connection.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as T[]))));
+  } finally {
+    lane.active--;
+    lane.waiting.shift()?.();
+  }
 }
 
 /** The first row of readRows, or undefined. */

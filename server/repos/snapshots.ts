@@ -1,5 +1,5 @@
-import { QueryTypes } from 'sequelize';
 import type { Transaction } from 'sequelize';
+import { readRow } from '../db/direct-read';
 import type { Models } from '../db/models';
 import type { SnapshotForkRow, SnapshotLinkRow, SnapshotRow } from '../db/models/snapshots';
 
@@ -28,26 +28,10 @@ export async function findLinkRow(m: Models, snapshotId: string): Promise<Snapsh
   return row ? row.get({ plain: true }) : null;
 }
 
-interface SqliteRead {
-  get(sql: string, params: unknown[], cb: (err: Error | null, row: unknown) => void): void;
-}
-
-/**
- * Reads one row on the driver's shared connection (the one Sequelize uses outside transactions),
- * skipping Sequelize's query layer: this runs on every public read of a share link.
- */
-async function readOne<T extends object>(m: Models, sql: string, params: unknown[]): Promise<T | undefined> {
-  // PostgreSQL has a pool rather than one shared connection: there the plain query layer is used.
-  if (m.sequelize.getDialect() !== 'sqlite') return (await m.sequelize.query<T>(sql, { replacements: params, type: QueryTypes.SELECT }))[0];
-  const manager = m.sequelize.connectionManager as unknown as { getConnection(o: object): Promise<SqliteRead> };
-  const connection = await manager.getConnection({});
-  return new Promise((resolve, reject) => connection.get(sql, params, (err, row) => (err ? reject(err) : resolve(row as T | undefined))));
-}
-
 /** The link found by the SHA-256 of its id: one indexed read, whether or not the id exists. */
 export async function findLinkByHash(m: Models, idHash: string): Promise<Pick<SnapshotLinkRow, 'snapshotId' | 'expiresAt' | 'revokedAt'> | null> {
-  const r = await readOne<{ snapshot_id: string; expires_at: string | null; revoked_at: string | null }>(
-    m,
+  const r = await readRow<{ snapshot_id: string; expires_at: string | null; revoked_at: string | null }>(
+    m.sequelize,
     'SELECT snapshot_id, expires_at, revoked_at FROM snapshot_links WHERE id_hash = ?',
     [idHash],
   );
