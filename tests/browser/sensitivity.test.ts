@@ -155,7 +155,7 @@ describe('the sensitivity page', () => {
     await p.getByRole('status').filter({ hasText: 'Settings kept with the scenario.' }).waitFor();
     await p.reload();
     await p.getByRole('heading', { name: /Where the answer changes/ }).waitFor();
-    expect(Number(await p.getByLabel('Seed').inputValue())).toBe(seed);
+    expect(Number(await p.getByLabel('Seed').inputValue()), s.errors.join('\n')).toBe(seed);
     await p.getByRole('button', { name: 'Run the draws' }).click();
     await p.getByTestId('uncertainty-result').waitFor();
     expect(await table.innerText()).toBe(first);

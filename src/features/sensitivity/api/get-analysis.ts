@@ -9,5 +9,5 @@ export function getAnalysis(wid: string, sid: string, signal?: AbortSignal) {
 }
 
 export function getAnalysisQueryOptions(wid: string, sid: string) {
-  return queryOptions({ queryKey: ['scenarios', 'analysis', sid], queryFn: ({ signal }) => getAnalysis(wid, sid, signal), staleTime: Infinity, retry: false });
+  return queryOptions({ queryKey: ['scenarios', 'analysis', sid], queryFn: ({ signal }) => getAnalysis(wid, sid, signal), staleTime: Infinity, retry: 2 });
 }

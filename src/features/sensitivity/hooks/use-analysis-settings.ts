@@ -10,7 +10,7 @@ import type { AnalysisSettings } from '../lib/analysis-settings';
 export interface SavedAnalysisSettings {
   /** what was saved, or null when nothing was (the page then starts from defaults) */
   saved: AnalysisSettings | null;
-  /** false while saved settings are still being fetched */
+  /** true once the server has said what is saved (false while fetching, and after a failed fetch) */
   ready: boolean;
   /** false for readers who may not change the scenario: their changes last for this visit only */
   shared: boolean;
@@ -93,6 +93,10 @@ export function useAnalysisSettings(workspaceId: string, scenarioId: string): Sa
   );
 
   const clear = useCallback(() => {
+    // An edit still waiting to be sent belongs to the settings being dropped: sent later, it would
+    // overwrite the fresh ones (and their new seed) on the server.
+    clearTimeout(timer.current);
+    pending.current = null;
     sendNow.current = true;
     setLocal({ sid: scenarioId, settings: null });
   }, [scenarioId]);
@@ -100,5 +104,7 @@ export function useAnalysisSettings(workspaceId: string, scenarioId: string): Sa
   const fromServer = query.data?.settings ? analysisSettingsSchema.safeParse(query.data.settings) : undefined;
   const mine = local?.sid === scenarioId ? local : null;
   const saved = mine ? mine.settings : fromServer?.success ? fromServer.data : null;
-  return { saved, ready: !query.isPending, shared, status, save, clear };
+    // Ready only once the server has answered: a failed read is not "nothing saved", and must not lead
+  // the page to store fresh suggested settings (a new seed) over the ones kept.
+  return { saved, ready: query.isSuccess, shared, status, save, clear };
 }
