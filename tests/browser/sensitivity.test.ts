@@ -153,6 +153,13 @@ describe('the sensitivity page', () => {
 
     // A reload before the server has the new seed would rightly show the old one: wait for the page to say it is kept.
     await p.getByRole('status').filter({ hasText: 'Settings kept with the scenario.' }).waitFor();
+    // The server holds the seed the page shows (read through the API, as another member's browser would).
+    const keptSeed = await p.evaluate(async (page) => {
+      const [, wid, sid] = /\/w\/([^/]+)\/scenarios\/([^/]+)/.exec(page)!;
+      const reply = (await (await fetch(`/api/workspaces/${wid}/scenarios/${sid}/analysis`)).json()) as { settings?: { uncertainty?: { seed?: string } } };
+      return Number(reply.settings?.uncertainty?.seed);
+    }, url);
+    expect(keptSeed, s.errors.join('\n')).toBe(seed);
     await p.reload();
     await p.getByRole('heading', { name: /Where the answer changes/ }).waitFor();
     expect(Number(await p.getByLabel('Seed').inputValue()), s.errors.join('\n')).toBe(seed);
