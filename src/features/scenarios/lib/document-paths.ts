@@ -1,21 +1,11 @@
-/** One step of a field path: an object key or an array index. */
-type Step = string | number;
+import { getAt, pathKeys } from '../../../engine/sensitivity/inputs';
 
-/** Splits a path in the notation of Problem lines (`options[1].wallWatts`) into its steps. */
-export function parsePath(path: string): Step[] {
-  const steps: Step[] = [];
-  for (const part of path.match(/[^.[\]]+|\[\d+\]/g) ?? []) steps.push(part.startsWith('[') ? Number(part.slice(1, -1)) : part);
-  return steps;
-}
+/** Splits a path in the notation of Problem lines (`options[1].wallWatts`) into its steps (the engine's own reader). */
+export const parsePath = pathKeys;
 
 /** The value at `path` in a document, or undefined when any step is missing. */
 export function valueAtPath(document: unknown, path: string): unknown {
-  let here: unknown = document;
-  for (const step of parsePath(path)) {
-    if (here === null || typeof here !== 'object') return undefined;
-    here = (here as Record<string | number, unknown>)[step];
-  }
-  return here;
+  return getAt(document, pathKeys(path));
 }
 
 const LONGEST = 120;
