@@ -36,16 +36,15 @@ export function frontDoor(app: RequestListener, deps: { m: Models; log: Logger; 
     if (id === undefined) return void app(req, res);
     const requestId = trackRequest(deps.log, req, res, req.url ?? '', { setHeader: false });
     // One list of headers given to writeHead: Node writes it as it is, without the per-header work of setHeader.
-    const head = [...security, 'X-Request-Id', requestId];
     snapshotReply(reader, id, req).then(
       (reply) => {
-        res.writeHead(reply.status, [...head, ...reply.headers]);
+        res.writeHead(reply.status, [...security, 'X-Request-Id', requestId, ...reply.headers]);
         res.end(reply.body ?? undefined);
       },
       (error: unknown) => {
         const { status, body } = describeError(error, requestId, deps.log);
         const text = JSON.stringify(body);
-        res.writeHead(status, [...head, 'Content-Type', 'application/json; charset=utf-8', 'Content-Length', String(Buffer.byteLength(text))]);
+        res.writeHead(status, [...security, 'X-Request-Id', requestId, 'Content-Type', 'application/json; charset=utf-8', 'Content-Length', String(Buffer.byteLength(text))]);
         res.end(text);
       },
     );

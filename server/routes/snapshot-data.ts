@@ -3,7 +3,6 @@ import type { RequestHandler } from 'express';
 import type { Models } from '../db/models';
 import { snapshotReader } from '../services/snapshots/read-snapshot';
 import type { SnapshotReader } from '../services/snapshots/read-snapshot';
-import { SizedLru } from '../services/snapshots/lru-cache';
 
 /** GET /api/snapshots/<id> with an optional trailing slash and query; ids are checked as idParam does. */
 const PATH = /^\/api\/snapshots\/([A-Za-z0-9_-]{1,64})\/?(?:\?.*)?$/;
@@ -20,19 +19,6 @@ function notModified(req: IncomingMessage, etag: string): boolean {
   const header = req.headers['if-none-match'];
   if (!header) return false;
   return header.trim() === '*' || header.split(',').some((tag) => tag.trim().replace(/^W\//, '') === etag);
-}
-
-/** Whole reply bodies by entity tag (the snapshot with its link's state), up to this many bytes per reader. */
-const BODY_CACHE_BYTES = 16 * 1024 * 1024;
-const bodies = new WeakMap<SnapshotReader, SizedLru<Buffer>>();
-
-/** The body for this entity tag, made once while it stays in the cache: a busy link allocates nothing per request. */
-function bodyOf(reader: SnapshotReader, etag: string, make: () => Buffer): Buffer {
-  let cache = bodies.get(reader);
-  if (!cache) bodies.set(reader, (cache = new SizedLru<Buffer>(BODY_CACHE_BYTES)));
-  let body = cache.get(etag);
-  if (!body) cache.set(etag, (body = make()));
-  return body;
 }
 
 /** A reply ready to write: its status, its headers as a flat name, value, name, value… list, and its body. */
@@ -54,7 +40,7 @@ export async function snapshotReply(reader: SnapshotReader, id: string, req: Inc
   const etag = `"${id}.${link.status}.${link.expiresAt ?? ''}"`;
   const caching = ['Cache-Control', 'private, no-cache', 'ETag', etag];
   if (notModified(req, etag)) return { status: 304, headers: caching, body: null };
-  const body = bodyOf(reader, etag, () => Buffer.concat([Buffer.from(`{"link":${JSON.stringify(link)},"snapshot":`, 'utf8'), snapshotBytes, CLOSE]));
+  const body = Buffer.concat([Buffer.from(`{"link":${JSON.stringify(link)},"snapshot":`, 'utf8'), snapshotBytes, CLOSE]);
   const headers = [...caching, 'Content-Type', 'application/json; charset=utf-8', 'Content-Length', String(body.length)];
   return { status: 200, headers, body: req.method === 'HEAD' ? null : body };
 }
