@@ -32,7 +32,7 @@ function Entry({ name, value }: { name: string; value: unknown }) {
     return (
       <>
         <dt className="figure text-ink-soft">{name}</dt>
-        <dd className="figure break-all">{Array.isArray(value) ? value.map((x) => displayValue(x)).join(', ') || '(none)' : displayValue(value)}</dd>
+        <dd className="figure [overflow-wrap:anywhere]">{Array.isArray(value) ? value.map((x) => displayValue(x)).join(', ') || '(none)' : displayValue(value)}</dd>
       </>
     );
   }
