@@ -1,6 +1,7 @@
 import { useEffect, useMemo } from 'react';
 import type { Scenario } from '../../../contracts/scenario';
 import { Button } from '../../../components/ui/button';
+import { LoadingState } from '../../../components/ui/states';
 import { useAnalysisSettings } from '../hooks/use-analysis-settings';
 import type { SaveStatus } from '../hooks/use-analysis-settings';
 import { defaultAnalysisSettings, fitToScenario } from '../lib/analysis-settings';
@@ -26,6 +27,8 @@ export function SensitivityPanel({ workspaceId, scenarioId, scenario }: { worksp
   useEffect(() => {
     if (ready && !saved) save(defaults);
   }, [ready, saved, save, defaults]);
+  // Until the kept settings arrive, suggested ones (another seed) would show and then change under the reader.
+  if (store.loading) return <LoadingState what="Loading the settings kept with this scenario" />;
   const update = <K extends keyof AnalysisSettings>(key: K, value: AnalysisSettings[K]) => save({ ...settings, [key]: value });
 
   return (

@@ -12,6 +12,8 @@ export interface SavedAnalysisSettings {
   saved: AnalysisSettings | null;
   /** true once the server has said what is saved (false while fetching, and after a failed fetch) */
   ready: boolean;
+  /** true while the kept settings are still being fetched */
+  loading: boolean;
   /** false for readers who may not change the scenario: their changes last for this visit only */
   shared: boolean;
   /** where the last change stands: waiting or on its way, kept on the server, or refused (null before any change) */
@@ -106,5 +108,5 @@ export function useAnalysisSettings(workspaceId: string, scenarioId: string): Sa
   const saved = mine ? mine.settings : fromServer?.success ? fromServer.data : null;
     // Ready only once the server has answered: a failed read is not "nothing saved", and must not lead
   // the page to store fresh suggested settings (a new seed) over the ones kept.
-  return { saved, ready: query.isSuccess, shared, status, save, clear };
+  return { saved, ready: query.isSuccess, loading: query.isPending, shared, status, save, clear };
 }
