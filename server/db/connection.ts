@@ -37,6 +37,7 @@ export async function openDatabase(storage: string): Promise<Sequelize> {
     }
     const sequelize = new Sequelize({ dialect: 'sqlite', storage, logging: false });
     configureEachConnection(sequelize);
+    closeOneAtATime(sequelize);
     serialiseTransactions(sequelize);
     await sequelize.authenticate();
     return sequelize;
@@ -64,6 +65,28 @@ function configureEachConnection(sequelize: Sequelize): void {
       );
     }
     return connection;
+  };
+}
+
+interface OpenConnections {
+  connections: Record<string, { close(cb: (err: Error | null) => void): void }>;
+}
+
+/**
+ * Closes the SQLite connections one after another before Sequelize's own close. The last
+ * connection to close checkpoints the write-ahead log and deletes it (SQLite documentation,
+ * "Write-Ahead Logging"). Sequelize closes them all at once, each on its own libuv thread, and
+ * then each can still see the others open, so none is the last one and the log stays behind.
+ */
+function closeOneAtATime(sequelize: Sequelize): void {
+  const manager = sequelize.connectionManager as unknown as OpenConnections;
+  const close = sequelize.close.bind(sequelize);
+  sequelize.close = async () => {
+    for (const [name, connection] of Object.entries(manager.connections)) {
+      delete manager.connections[name];
+      await new Promise<void>((resolve, reject) => connection.close((err) => (err ? reject(err) : resolve())));
+    }
+    return close();
   };
 }
 
