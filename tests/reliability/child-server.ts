@@ -12,13 +12,16 @@ export interface ChildServer {
   exited: Promise<number | string>;
 }
 
+/** `node --import tsx server/index.ts`. Not the `tsx` launcher: it runs the server in a second process, which a SIGKILL of the launcher would leave running. */
+export const NODE_COMMAND: readonly string[] = [process.execPath, '--import', 'tsx', 'server/index.ts'];
+
 /**
- * Starts `node --import tsx server/index.ts` on a free port against `databasePath`, without building
- * the client, and resolves once it logs the port it serves on. Not the `tsx` launcher: it runs the
- * server in a second process, which a SIGKILL of the launcher would leave running.
+ * Starts the server (by `command`, `node` by default) on a free port against `databasePath`, without
+ * building the client, and resolves once it logs the port it serves on.
  */
-export function startChildServer(databasePath: string, env: Record<string, string> = {}, timeoutMs = 90_000): Promise<ChildServer> {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+export function startChildServer(databasePath: string, env: Record<string, string> = {}, timeoutMs = 90_000, command: readonly string[] = NODE_COMMAND): Promise<ChildServer> {
+  const [program = process.execPath, ...args] = command;
+  const child = spawn(program, args, {
     cwd: process.cwd(),
     env: { ...process.env, NODE_ENV: 'test', SKIP_CLIENT_BUILD: '1', LOG_LEVEL: 'info', PORT: '0', HOST: '127.0.0.1', DATABASE_PATH: databasePath, ...env },
     stdio: ['ignore', 'pipe', 'pipe'],

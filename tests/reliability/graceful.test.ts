@@ -71,6 +71,21 @@ describe('shutting down on SIGTERM', () => {
   });
 });
 
+describe('npm start', () => {
+  // npm passes SIGTERM to the script's process only; a shell or launcher between them would die
+  // and leave the server running on its port with nobody to stop it.
+  it('hands SIGTERM on to the server, which shuts down and frees its port', { timeout: 120_000 }, async () => {
+    const started = await startChildServer(join(dir, 'npm-start.sqlite'), {}, 90_000, ['npm', 'start', '--silent']);
+    server = started;
+    expect((await fetch(`${started.base}/api/health/live`)).status).toBe(200);
+    started.process.kill('SIGTERM');
+    expect(await started.exited).toBe(0);
+    expect(started.output.some((l) => l.includes('"signal":"SIGTERM"') && l.includes('shutting down'))).toBe(true);
+    const after = await fetch(`${started.base}/api/health/live`).then((r) => r.status, () => 'refused');
+    expect(after, 'nothing answers on the port once npm has exited').toBe('refused');
+  });
+});
+
 describe('/api/health', () => {
   it('reports liveness and readiness apart: live while the process answers, ready only while the database does', async () => {
     const sequelize = await openDatabase(join(dir, 'health.sqlite'));
