@@ -1,12 +1,14 @@
 import { boot } from './boot';
 import { buildClientIfNeeded } from './build-client';
 import { ConfigError, describeDatabase, readConfig } from './config';
+import { checkDatabasePlace } from './db/connection';
 import { createLogger } from './logger';
 
 const log = createLogger();
 
 async function start(): Promise<void> {
   const config = readConfig();
+  checkDatabasePlace(config);
   if (process.env.SKIP_CLIENT_BUILD !== '1' && (await buildClientIfNeeded(process.cwd()))) log.info('client built');
   const running = await boot(config, log);
   log.info({ port: running.port, database: describeDatabase(config) }, `Photon Parity is serving on http://localhost:${running.port}`);

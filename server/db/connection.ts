@@ -28,13 +28,30 @@ export function openConfiguredDatabase(config: Pick<Config, 'databasePath' | 'da
   return config.databaseUrl ? openPostgres(config.databaseUrl) : openDatabase(config.databasePath);
 }
 
+const unwritable = (storage: string, error: unknown) =>
+  new ConfigError(
+    `the database file ${storage} cannot be created or written (${(error as NodeJS.ErrnoException).code ?? (error as Error).message}); set DATABASE_PATH to a writable place`,
+  );
+
+/**
+ * Creates the SQLite file's folder and checks that it can be written, so that a bad DATABASE_PATH
+ * stops the start at once, before anything slow (such as building the client) runs.
+ */
+export function checkDatabasePlace(config: Pick<Config, 'databasePath' | 'databaseUrl'>): void {
+  const storage = config.databasePath;
+  if (config.databaseUrl || storage === ':memory:') return;
+  try {
+    mkdirSync(dirname(storage), { recursive: true });
+    accessSync(dirname(storage), constants.W_OK);
+  } catch (error) {
+    throw unwritable(storage, error);
+  }
+}
+
 /** Opens the embedded SQLite database (creating its folder) with the product's PRAGMAs. */
 export async function openDatabase(storage: string): Promise<Sequelize> {
+  checkDatabasePlace({ databasePath: storage, databaseUrl: undefined });
   try {
-    if (storage !== ':memory:') {
-      mkdirSync(dirname(storage), { recursive: true });
-      accessSync(dirname(storage), constants.W_OK);
-    }
     const sequelize = new Sequelize({ dialect: 'sqlite', storage, logging: false });
     configureEachConnection(sequelize);
     closeOneAtATime(sequelize);
@@ -42,8 +59,7 @@ export async function openDatabase(storage: string): Promise<Sequelize> {
     await sequelize.authenticate();
     return sequelize;
   } catch (error) {
-    const reason = (error as NodeJS.ErrnoException).code ?? (error as Error).message;
-    throw new ConfigError(`the database file ${storage} cannot be created or written (${reason}); set DATABASE_PATH to a writable place`);
+    throw unwritable(storage, error);
   }
 }
 

@@ -77,6 +77,18 @@ describe('scenarios', () => {
     expect(reply.result.options[0]?.fixturesExact).toBeCloseTo((600 * 8) / (1.2 * 600), 9);
   });
 
+  it('computes afresh when the stored document changes under an unchanged revision number (a restored backup)', async () => {
+    const created = (await editor.post(base(), { document: sampleScenario('Restored later') })).body.scenario;
+    const first = scenarioResultResponseSchema.parse((await editor.get(`${base()}/${created.id}/result`)).body);
+    const original = sampleScenario('Restored later');
+    const restored = { ...original, electricity: { ...original.electricity, pricePerKwh: '0.05' } };
+    await app.running.sequelize.query('UPDATE scenarios SET document = ? WHERE id = ?', { replacements: [JSON.stringify(restored), created.id] });
+    const second = scenarioResultResponseSchema.parse((await editor.get(`${base()}/${created.id}/result`)).body);
+    expect(second.revision).toBe(first.revision);
+    expect(second.result).toEqual(computeScenario(restored));
+    expect(second.result).not.toEqual(first.result);
+  });
+
   it('duplicates a scenario with a new title and its own history', async () => {
     const created = (await editor.post(base(), { document: sampleScenario('Original') })).body.scenario;
     const copy = await editor.post(`${base()}/${created.id}/duplicate`, { title: 'Copy for the client' });

@@ -1,6 +1,9 @@
+import { spawnSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync, chmodSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { join, resolve } from 'node:path';
+import { pathToFileURL } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { boot } from '../../server/boot';
 import type { Running } from '../../server/boot';
@@ -77,5 +80,22 @@ describe('configuration', () => {
     chmodSync(locked, 0o444);
     const config = readConfig({ NODE_ENV: 'test', PORT: '0', DATABASE_PATH: join(locked, 'sub', 'x.sqlite') });
     await expect(boot(config, createLogger('silent'))).rejects.toThrow(/cannot be created or written .*DATABASE_PATH/);
+  });
+
+  it('checks the database path before building the client, so a bad one stops npm start at once', () => {
+    const locked = join(dir, 'locked-for-start');
+    writeFileSync(locked, 'a file, not a folder');
+    // An empty folder as the working directory: had the client build run first, it would have
+    // failed there on the missing index.html, with another message.
+    const empty = mkdtempSync(join(tmpdir(), 'pp-no-client-'));
+    const tsx = pathToFileURL(createRequire(import.meta.url).resolve('tsx')).href;
+    const started = spawnSync(process.execPath, ['--import', tsx, resolve('server/index.ts')], {
+      cwd: empty,
+      env: { ...process.env, NODE_ENV: 'test', PORT: '0', DATABASE_PATH: join(locked, 'x.sqlite') },
+      encoding: 'utf8',
+      timeout: 60_000,
+    });
+    expect(started.status).toBe(1);
+    expect(started.stderr).toMatch(/^Photon Parity cannot start: the database file .*x\.sqlite cannot be created or written \(\w+\); set DATABASE_PATH to a writable place\n$/);
   });
 });

@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import type { ScenarioResultResponse } from '../../../src/contracts/api/result';
 import { ENGINE_VERSION, computeScenario, parseScenario } from '../../../src/engine';
 import type { Models } from '../../db/models';
@@ -13,7 +14,9 @@ export async function computeStoredScenario(m: Models, workspaceId: string, id: 
   if (!row) throw new AppError('not_found', 'There is no such scenario in this workspace.');
   const results = cache.get(m) ?? new ResultCache();
   cache.set(m, results);
-  const key = `${row.id}@${row.revision}@${ENGINE_VERSION}`;
+  // Keyed by the stored text, not the revision number: after a restore from a backup, revision
+  // numbers are handed out again for different documents while this process keeps running.
+  const key = `${row.id}@${createHash('sha256').update(row.document).digest('base64url')}@${ENGINE_VERSION}`;
   const known = results.get(key);
   if (known) return { scenarioId: row.id, revision: row.revision, result: known };
   const checked = parseScenario(JSON.parse(row.document));
