@@ -83,6 +83,15 @@ describe('a refused spectrum', () => {
     expect(spectrum(text)).toEqual(['line 15: a step of 20 nm from 500 nm (line 14); steps must be at most 10 nm']);
   });
 
+  it('accepts steps of exactly 10 nm between decimal wavelengths, whose floating-point difference is a hair over 10', () => {
+    const nm = Array.from({ length: 41 }, (_, i) => Number((392.2 + 10 * i).toFixed(1)));
+    expect(512.2 - 502.2).toBeGreaterThan(10);
+    expect(spectrum(spectrumCsv(nm, () => 0.01))).toEqual([]);
+    expect(spectrum(spectrumCsv([...nm.slice(0, 12), 512.3, ...nm.slice(13)], () => 0.01))).toEqual([
+      'line 14: a step of 10.1 nm from 502.2 nm (line 13); steps must be at most 10 nm',
+    ]);
+  });
+
   it('names a range that does not cover 400–700 nm at either end', () => {
     expect(spectrum(spectrumCsv(wavelengths(410, 690, 5), () => 1))).toEqual([
       'line 2: the data start at 410 nm; they must start at 400 nm or below to cover 400–700 nm',

@@ -24,6 +24,11 @@ export interface Spectrum {
 
 /** Largest gap between neighbouring wavelengths accepted, nm. */
 export const MAX_STEP_NM = 10;
+/**
+ * Slack on MAX_STEP_NM, nm: the difference of two decimal wavelengths is not exact in binary floating
+ * point (502.2 to 512.2 nm comes out as 10.000000000000057), and a file written in 10 nm steps must pass.
+ */
+const STEP_SLACK_NM = 1e-6;
 /** A spectrum must start at or below this wavelength, nm (PAR). */
 export const REQUIRED_FROM_NM = 400;
 /** A spectrum must reach this wavelength or beyond, nm (PAR). */
@@ -33,7 +38,7 @@ function checkWavelengths(lines: number[], nm: number[], problems: FileProblem[]
   for (let i = 1; i < nm.length; i++) {
     const step = nm[i]! - nm[i - 1]!;
     if (step <= 0) problems.push(lineProblem(lines[i]!, `${nm[i]} nm does not follow ${nm[i - 1]} nm (line ${lines[i - 1]}); wavelengths must ascend`));
-    else if (step > MAX_STEP_NM) {
+    else if (step > MAX_STEP_NM + STEP_SLACK_NM) {
       problems.push(lineProblem(lines[i]!, `a step of ${+step.toFixed(6)} nm from ${nm[i - 1]} nm (line ${lines[i - 1]}); steps must be at most ${MAX_STEP_NM} nm`));
     }
   }
