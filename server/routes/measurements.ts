@@ -12,7 +12,7 @@ import { measurementData, measurementView, measurementViews } from '../services/
 import { uploadMeasurement } from '../services/measurements/upload-measurement';
 import type { ApiDeps } from './api-deps';
 
-const LIMIT_TEXT = `${MEASUREMENT_FILE_LIMIT.toLocaleString('en')} bytes (2 MiB)`;
+const LIMIT_TEXT = `${MEASUREMENT_FILE_LIMIT.toLocaleString('en')} bytes (2 MB)`;
 
 /** Multipart reading with the file kept in memory (it is stored in SQLite, never on disk); multer's limits become the one error shape. */
 function receiveFile(): RequestHandler {
@@ -30,7 +30,8 @@ function receiveFile(): RequestHandler {
       if (!error) return next();
       const e = error as { code?: string; field?: string };
       if (e.code === 'LIMIT_FILE_SIZE') {
-        return next(new AppError('payload_too_large', `The file is larger than ${LIMIT_TEXT}; nothing was stored.`, [{ path: 'file', message: `is larger than ${LIMIT_TEXT}, the limit for a measurement file` }]));
+        // A file too large is one more bad file: 400 with the field named, like the others.
+        return next(new AppError('invalid_input', `The file is larger than ${LIMIT_TEXT}; nothing was stored.`, [{ path: 'file', message: `is larger than ${LIMIT_TEXT}, the limit for a measurement file` }]));
       }
       if (e.code === 'LIMIT_UNEXPECTED_FILE' || e.code === 'LIMIT_FILE_COUNT') {
         return next(new AppError('invalid_input', 'Send one file, in the field "file".', [{ path: e.field ?? 'file', message: 'send one file, in the field "file"' }]));

@@ -85,15 +85,15 @@ describe('a refused measurement file', () => {
     expect(r.fields).toEqual([{ path: 'file', message: 'is not UTF-8 text; save the file as CSV (UTF-8) and try again' }]);
   });
 
-  it('is answered 413 with the one error shape when over 2 MiB, and nothing is stored', async () => {
+  it('is answered 400 naming the file when over 2 MB (2,000,000 bytes), and nothing is stored', async () => {
     const big = `${'400,'.repeat(MEASUREMENT_FILE_LIMIT / 4)}400\n`;
     const r = await refused(grid, big);
-    expect(r.status).toBe(413);
-    expect(r.code).toBe('payload_too_large');
-    expect(r.fields).toEqual([{ path: 'file', message: 'is larger than 2,097,152 bytes (2 MiB), the limit for a measurement file' }]);
+    expect(r.status).toBe(400);
+    expect(r.code).toBe('invalid_input');
+    expect(r.fields).toEqual([{ path: 'file', message: 'is larger than 2,000,000 bytes (2 MB), the limit for a measurement file' }]);
   });
 
-  it('accepts a file of exactly 2 MiB', async () => {
+  it('accepts a file of exactly 2 MB (2,000,000 bytes)', async () => {
     const row = '400,450,500,550,600,650,700,750,800,850\n';
     const rows = Math.floor(MEASUREMENT_FILE_LIMIT / row.length) - 1;
     // the last row's first reading padded with zeros ("000…0400" is 400) to fill the limit exactly

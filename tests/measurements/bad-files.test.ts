@@ -22,12 +22,12 @@ describe('a refused PPFD grid', () => {
     expect(grid('400,450,500\n\n500,600\n')).toEqual(['line 3: has 2 values; line 1 has 3 (every canopy row needs the same count)']);
   });
 
-  it('refuses an empty file, a blank one, and one over the size limit (2 MiB by default)', () => {
+  it('refuses an empty file, a blank one, and one over the size limit (2 MB, 2,000,000 bytes, by default)', () => {
     expect(grid('')).toEqual(['line 1: the file is empty']);
     expect(grid('\n  \n')).toEqual(['line 1: the file is empty']);
     expect(grid('400,450\n', 5)).toEqual(['(file): is 8 bytes; the limit is 5 bytes']);
-    expect(DEFAULT_MAX_BYTES).toBe(2 * 1024 * 1024);
-    expect(grid(`${'400,'.repeat(DEFAULT_MAX_BYTES / 4)}400\n`)[0]).toMatch(/^\(file\): is 2,097,156 bytes; the limit is 2,097,152 bytes$/);
+    expect(DEFAULT_MAX_BYTES).toBe(2_000_000);
+    expect(grid(`${'400,'.repeat(DEFAULT_MAX_BYTES / 4)}400\n`)[0]).toMatch(/^\(file\): is 2,000,004 bytes; the limit is 2,000,000 bytes$/);
   });
 
   it('counts the size in UTF-8 bytes, not characters', () => {

@@ -10,8 +10,8 @@ export type MeasurementKind = z.infer<typeof measurementKindSchema>;
 /** Unit of a spectrum's values: W m⁻² nm⁻¹, µmol m⁻² s⁻¹ nm⁻¹, or relative spectral power. */
 export const spectrumUnitSchema = z.enum(['w', 'umol', 'relative'], { error: orRequired('must be one of w, umol, relative') });
 
-/** Largest measurement file accepted, bytes (2 MiB, the engine's default limit). */
-export const MEASUREMENT_FILE_LIMIT = 2 * 1024 * 1024;
+/** Largest measurement file accepted, bytes (2 MB, the engine's default limit). */
+export const MEASUREMENT_FILE_LIMIT = 2_000_000;
 
 /** A form field: empty text means "not given". */
 const blankIsMissing = (v: unknown) => (typeof v === 'string' && v.trim() === '' ? undefined : v);

@@ -2,8 +2,8 @@ import Papa from 'papaparse';
 import { fileProblem, lineProblem, refused } from './file-problems';
 import type { FileChecked, FileProblem } from './file-problems';
 
-/** Largest measurement file accepted by default: 2 MiB (2,097,152 bytes) of UTF-8 text. */
-export const DEFAULT_MAX_BYTES = 2 * 1024 * 1024;
+/** Largest measurement file accepted by default: 2 MB (2,000,000 bytes, SI megabytes) of UTF-8 text. */
+export const DEFAULT_MAX_BYTES = 2_000_000;
 
 /** One non-blank line of a CSV file: its 1-based line number and its trimmed cells. */
 export interface CsvRow {

@@ -17,7 +17,7 @@ export interface PpfdGrid {
 
 /** Options of the measurement file readers. */
 export interface ReadOptions {
-  /** Largest accepted file, bytes of UTF-8; default 2 MiB. */
+  /** Largest accepted file, bytes of UTF-8; default 2 MB (2,000,000 bytes). */
   maxBytes?: number;
 }
 

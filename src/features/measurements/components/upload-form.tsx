@@ -55,7 +55,7 @@ export function UploadForm({ workspaceId }: { workspaceId: string }) {
           </label>
         ))}
       </fieldset>
-      <Field label="CSV file" error={problems.file.join('; ') || (tooBig ? `is ${file.size.toLocaleString('en')} bytes; the limit is ${MEASUREMENT_FILE_LIMIT.toLocaleString('en')} bytes (2 MiB)` : undefined)}
+      <Field label="CSV file" error={problems.file.join('; ') || (tooBig ? `is ${file.size.toLocaleString('en')} bytes; the limit is ${MEASUREMENT_FILE_LIMIT.toLocaleString('en')} bytes (2 MB)` : undefined)}
         hint={kind === 'grid' ? 'Either one canopy row of readings per line (no header), or a header x, y, ppfd (m, m, µmol m⁻² s⁻¹) and one point per line.' : 'A header line, then wavelength in nm (ascending, steps of 10 nm or less, covering 400–700 nm) and the value. Readings below zero are counted as 0.'}>
         <Input type="file" accept=".csv,text/csv,text/plain" className="text-sm" onChange={(e) => choose(e.target.files?.[0] ?? null)} />
       </Field>
