@@ -11,6 +11,7 @@ import type { DrainableListener } from './http/front-door';
 import { requestIds } from './http/request-id';
 import { recordHeaders, securityHeaders } from './http/security-headers';
 import { rateLimits } from './http/rate-limits';
+import { refuseUnreadQuery } from './http/query-guard';
 import { createMailer } from './mail/mailer';
 import type { Mailer } from './mail/mailer';
 import { models } from './db/models';
@@ -43,6 +44,7 @@ export function createApp(deps: AppDeps): express.Express {
   const m = models(deps.sequelize);
   app.use(snapshotDataRoute(m));
   app.use('/api', express.json({ limit: '256kb' }));
+  app.use('/api', refuseUnreadQuery);
 
   const api = {
     config: deps.config,

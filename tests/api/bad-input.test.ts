@@ -54,6 +54,20 @@ describe('bad input', () => {
     expect(err.fields).toEqual([{ path: 'document.electricity.pricePerKwh', message: 'must not be negative' }]);
   });
 
+  it('names a query parameter on a route that reads none, and an unknown one where a route reads some', async () => {
+    const scenarioId = (await editor.get(`/api/workspaces/${wid}/scenarios`)).body.items[0].id as string;
+    for (const path of [`/api/workspaces/${wid}/scenarios/${scenarioId}/result`, `/api/workspaces/${wid}/fixtures`, `/api/workspaces/${wid}/members`, '/api/workspaces', '/api/me']) {
+      const err = expectError(await editor.get(`${path}?foo=1&pageSize=5`), 400, 'invalid_input');
+      expect(err.fields, path).toEqual([
+        { path: 'foo', message: 'is not a known field (check its spelling)' },
+        { path: 'pageSize', message: 'is not a known field (check its spelling)' },
+      ]);
+    }
+    expect((await editor.get(`/api/workspaces/${wid}/scenarios?q=room&pageSize=5`)).status).toBe(200);
+    const err = expectError(await editor.get(`/api/workspaces/${wid}/scenarios?bogus=1`), 400, 'invalid_input');
+    expect(err.fields).toEqual([{ path: 'bogus', message: 'is not a known field (check its spelling)' }]);
+  });
+
   it('answers malformed JSON with 400 malformed_json', async () => {
     expectError(await editor.send('POST', `/api/workspaces/${wid}/fixtures`, { body: '{"key": "a",', headers: { 'content-type': 'application/json' } }), 400, 'malformed_json');
   });
