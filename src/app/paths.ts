@@ -34,5 +34,6 @@ export const paths = {
   measurements: { pattern: '/w/:wid/measurements', to: (wid: string) => `/w/${enc(wid)}/measurements` },
   measurement: { pattern: '/w/:wid/measurements/:mid', to: (wid: string, mid: string) => `/w/${enc(wid)}/measurements/${enc(mid)}` },
   settings: { pattern: '/w/:wid/settings', to: (wid: string) => `/w/${enc(wid)}/settings` },
+  admin: { pattern: '/admin/:section', to: (section: 'mail' | 'accounts') => `/admin/${section}` },
   sharedSnapshot: { pattern: '/s/:id', to: (id: string) => `/s/${enc(id)}` },
 } as const;

@@ -32,6 +32,7 @@ export const router = createBrowserRouter([
           { path: paths.settings.pattern, lazy: page(() => import('./routes/settings')) },
         ],
       },
+      { path: paths.admin.pattern, lazy: page(() => import('./routes/admin')) },
       { path: paths.sharedSnapshot.pattern, lazy: page(() => import('./routes/shared-snapshot')) },
       { path: '*', lazy: page(() => import('./routes/not-found')) },
     ],

@@ -1,6 +1,7 @@
 import { Link, Outlet, useMatch, useNavigate } from 'react-router-dom';
 import { BrandMark } from '../../components/brand-mark';
 import { Button } from '../../components/ui/button';
+import { AdminLink } from '../../features/admin/components/admin-link';
 import { useSignOut } from '../../features/auth/api/sign-out';
 import { WorkspaceSwitcher } from '../../features/workspaces/components/workspace-switcher';
 import { useMe } from '../../lib/auth';
@@ -35,6 +36,7 @@ export function RootLayout() {
           <div className="ml-auto flex items-center gap-3 text-sm">
             {user ? (
               <>
+                <AdminLink />
                 <span className="text-spruce-100">
                   Signed in as <span className="font-medium text-white">{user.name}</span>
                 </span>
