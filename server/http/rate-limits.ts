@@ -29,6 +29,7 @@ export function rateLimits(): {
   signUp: RequestHandler;
   inviting: RequestHandler;
   invitationLinks: RequestHandler;
+  passwordChanges: RequestHandler;
 } {
   return {
     // Password guessing against one account from one address.
@@ -39,5 +40,7 @@ export function rateLimits(): {
     inviting: limiter(60 * MINUTE, 50, 'invitations sent', (req) => callerOf(req)?.user.id ?? ipKey(req)),
     // Guessing invitation links.
     invitationLinks: limiter(15 * MINUTE, 60, 'invitation link lookups'),
+    // Guessing the current password from a session left open; each try also costs a scrypt hash.
+    passwordChanges: limiter(15 * MINUTE, 10, 'password change attempts', (req) => callerOf(req)?.user.id ?? ipKey(req)),
   };
 }

@@ -15,7 +15,7 @@ export function accountRouter({ m, session, limits }: ApiDeps): Router {
     const input = parseBody(signUpRequestSchema, req);
     res.status(201).json({ user: await signUp(m, input, clientIp(req)) });
   });
-  router.post('/password', async (req, res) => {
+  router.post('/password', limits.passwordChanges, async (req, res) => {
     const caller = requireCaller(req);
     const input = parseBody(passwordChangeRequestSchema, req);
     const updated = await changePassword(m, caller.user, input.currentPassword, input.newPassword, clientIp(req));
