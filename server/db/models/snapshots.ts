@@ -18,6 +18,8 @@ export interface SnapshotRow {
   fixtures: string;
   /** JSON: SnapshotMeasurement[] */
   measurements: string;
+  /** JSON: the AnalysisSettings kept with the scenario when the snapshot was made, or null (migration 0008) */
+  analysis: string | null;
   notes: string;
   createdBy: string;
   createdByName: string;
@@ -63,6 +65,7 @@ export function defineSnapshots(sequelize: Sequelize): { Snapshot: SnapshotModel
       result: text(),
       fixtures: text(),
       measurements: text(),
+      analysis: { type: DataTypes.TEXT, allowNull: true },
       notes: text(),
       createdBy: { type: DataTypes.STRING(64), allowNull: false },
       createdByName: { type: DataTypes.STRING(80), allowNull: false },

@@ -2,6 +2,7 @@ import type { Scenario } from '../../../src/contracts/scenario';
 import type { ScenarioRecord } from '../../../src/contracts/api/scenarios';
 import type { Models } from '../../db/models';
 import { AppError } from '../../http/app-error';
+import { copyAnalysis } from '../../repos/scenario-analysis';
 import { advanceScenario, appendRevision, findRevision, findScenarioRow, insertScenario, scenarioRecord } from '../../repos/scenarios';
 import type { RevisionAction } from '../../repos/scenarios';
 import { changedPaths } from './changed-paths';
@@ -66,14 +67,16 @@ export async function restoreRevision(m: Models, workspaceId: string, id: string
   return advance(m, workspaceId, id, null, old.document, userId, 'restored', revision);
 }
 
-/** Copies the current document into a new scenario in the same workspace. */
+/** Copies the current document, and the sensitivity settings kept with it (seed included), into a new scenario in the same workspace. */
 export async function duplicateScenario(m: Models, workspaceId: string, id: string, title: string | undefined, userId: string): Promise<ScenarioRecord> {
   const copy = await m.sequelize.transaction(async (t) => {
     const row = await findScenarioRow(m, workspaceId, id, t);
     if (!row) throw notFound();
     const source = JSON.parse(row.document) as Scenario;
     const document: Scenario = { ...source, title: title ?? `${source.title} (copy)`.slice(0, 200) };
-    return insertScenario(m, workspaceId, document, userId, { action: 'duplicated', fromRevision: row.revision }, t);
+    const inserted = await insertScenario(m, workspaceId, document, userId, { action: 'duplicated', fromRevision: row.revision }, t);
+    await copyAnalysis(m, row.id, inserted.id, userId, t);
+    return inserted;
   });
   return scenarioRecord(m, copy);
 }

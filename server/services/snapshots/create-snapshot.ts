@@ -6,6 +6,7 @@ import type { UserRow } from '../../db/models/users';
 import { AppError } from '../../http/app-error';
 import { recordAudit } from '../../repos/audit';
 import { listFixtureRows } from '../../repos/fixtures';
+import { findAnalysis } from '../../repos/scenario-analysis';
 import { findScenarioRow } from '../../repos/scenarios';
 import { insertSnapshot } from '../../repos/snapshots';
 import { fixtureProvenance } from './fixture-provenance';
@@ -25,7 +26,8 @@ export interface CreateSnapshot {
 /**
  * Freezes a scenario's current stored revision: validates the stored document, computes the result
  * on the server (never taking figures from the request), and copies the fixture provenance and
- * measurement summaries as plain data. The id is a 21-character nanoid from the platform's secure random source.
+ * measurement summaries as plain data, and the sensitivity settings kept with the scenario (seed
+ * included) so a reader can rerun the same uncertainty draws. The id is a 21-character nanoid from the platform's secure random source.
  */
 export async function createSnapshot(m: Models, c: CreateSnapshot): Promise<SnapshotSummary> {
   const row = await findScenarioRow(m, c.workspaceId, c.scenarioId);
@@ -39,6 +41,7 @@ export async function createSnapshot(m: Models, c: CreateSnapshot): Promise<Snap
   const library = new Map((await listFixtureRows(m, c.workspaceId)).map((f) => [String(f.key), f]));
   const fixtures = fixtureProvenance(library, scenario);
   const measurements = await measurementSummaries(m, c.workspaceId, library, scenario.options.map((o) => o.id));
+  const { settings } = await findAnalysis(m, row.id);
   const id = nanoid();
   const created = await m.sequelize.transaction(async (t) => {
     const snapshot = await insertSnapshot(
@@ -55,6 +58,7 @@ export async function createSnapshot(m: Models, c: CreateSnapshot): Promise<Snap
         result: JSON.stringify(result),
         fixtures: JSON.stringify(fixtures),
         measurements: JSON.stringify(measurements),
+        analysis: settings ? JSON.stringify(settings) : null,
         notes: c.notes,
         createdBy: c.author.id,
         createdByName: c.author.name,

@@ -5,6 +5,7 @@ import type { Models } from '../../db/models';
 import { roleAtLeast } from '../../http/access';
 import { AppError } from '../../http/app-error';
 import { recordAudit } from '../../repos/audit';
+import { saveAnalysis } from '../../repos/scenario-analysis';
 import { insertScenario, scenarioRecord } from '../../repos/scenarios';
 import { insertFork } from '../../repos/snapshots';
 import { findMembership } from '../../repos/workspaces';
@@ -19,7 +20,8 @@ export interface ForkSnapshot {
 
 /**
  * Copies a snapshot's scenario into a workspace where the caller is an editor or owner, as a new
- * scenario at revision 1 that remembers the snapshot it came from. Not a member: 404, as everywhere.
+ * scenario at revision 1 that remembers the snapshot it came from and keeps the sensitivity settings
+ * frozen with it (seed included), so the copy reruns the same draws. Not a member: 404, as everywhere.
  */
 export async function forkSnapshot(m: Models, f: ForkSnapshot): Promise<ScenarioRecord> {
   const membership = await findMembership(m, f.workspaceId, f.userId);
@@ -31,6 +33,7 @@ export async function forkSnapshot(m: Models, f: ForkSnapshot): Promise<Scenario
   return m.sequelize.transaction(async (t) => {
     const row = await insertScenario(m, f.workspaceId, document, f.userId, { action: 'created', fromRevision: null }, t);
     await insertFork(m, { scenarioId: row.id, snapshotId: f.snapshot.id, forkedBy: f.userId }, t);
+    if (f.snapshot.analysis) await saveAnalysis(m, row.id, f.snapshot.analysis, f.userId, t);
     await recordAudit(m, { action: 'snapshot_forked', actorUserId: f.userId, workspaceId: f.workspaceId, target: f.snapshot.id, ip: f.ip, details: { scenarioId: row.id } }, t);
     return scenarioRecord(m, row, t);
   });

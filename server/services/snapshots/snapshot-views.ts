@@ -1,3 +1,4 @@
+import { analysisSettingsSchema } from '../../../src/contracts/api/analysis';
 import type { PublicSnapshot, SnapshotFixture, SnapshotMeasurement, SnapshotSummary } from '../../../src/contracts/api/snapshots';
 import type { Scenario } from '../../../src/contracts/scenario';
 import type { ScenarioResult } from '../../../src/engine';
@@ -21,6 +22,13 @@ export function snapshotSummary(row: SnapshotRow, link: Pick<SnapshotLinkRow, 'e
   };
 }
 
+/** The settings frozen with a snapshot, when there are any that still parse. */
+function frozenAnalysis(row: SnapshotRow): Pick<PublicSnapshot, 'analysis'> {
+  if (row.analysis === null || row.analysis === undefined) return {};
+  const parsed = analysisSettingsSchema.safeParse(JSON.parse(row.analysis));
+  return parsed.success ? { analysis: parsed.data } : {};
+}
+
 /** The immutable public part of a snapshot, from its stored columns only. */
 export function publicSnapshot(row: SnapshotRow): PublicSnapshot {
   return {
@@ -35,5 +43,6 @@ export function publicSnapshot(row: SnapshotRow): PublicSnapshot {
     result: JSON.parse(row.result) as ScenarioResult,
     engineVersion: row.engineVersion,
     inputHash: row.inputHash,
+    ...frozenAnalysis(row),
   };
 }

@@ -1,5 +1,6 @@
 import { z } from '../zod-messages';
 import { scenarioSchema } from '../scenario';
+import { analysisSettingsSchema } from './analysis';
 import { dataSourceSchema } from './fixtures';
 import { emailSchema, idSchema, instantSchema, plainText, userRefSchema } from './common';
 import { scenarioResultSchema } from './result';
@@ -61,6 +62,12 @@ export const publicSnapshotSchema = z.object({
   engineVersion: z.string(),
   /** SHA-256 (hex) of the canonical scenario JSON */
   inputHash: z.string().regex(/^[0-9a-f]{64}$/),
+  /**
+   * The sensitivity settings kept with the scenario when the snapshot was made (uncertainty ranges,
+   * number of draws and seed among them), frozen with it; absent when there were none. Not covered
+   * by `inputHash`, which stays the hash of the scenario alone.
+   */
+  analysis: analysisSettingsSchema.optional(),
 });
 export type PublicSnapshot = z.infer<typeof publicSnapshotSchema>;
 
