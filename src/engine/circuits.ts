@@ -38,6 +38,8 @@ export interface CircuitPlan {
   circuits: number | null;
   /** current on the most loaded circuit, A; null when circuits is null */
   heaviestCircuitAmps: number | null;
+  /** heat the lighting gives off into the room with every whole fixture on, W */
+  heatWatts: number;
 }
 
 /**
@@ -62,6 +64,19 @@ export function continuousLimit(breakerAmps: number): number {
 }
 
 /**
+ * Heat the lighting gives off into the room: all the power drawn at the wall, light included (the
+ * light is absorbed in the room), q = fixtures × W. This is the lighting heat gain q = W × Ful × Fsa
+ * of the ASHRAE Handbook—Fundamentals (chapter on nonresidential cooling loads; recalled from memory)
+ * with every fixture on (Ful = 1) and the ballast or driver already in the wall power (Fsa = 1).
+ * @param fixtures fixtures switched on, may be fractional
+ * @param wallWatts input power of one fixture at the wall, W
+ * @returns W (convert with wattsToBtuPerHour for BTU/h)
+ */
+export function lightingHeatWatts(fixtures: number, wallWatts: number): number {
+  return fixtures * wallWatts;
+}
+
+/**
  * Whole fixtures one branch circuit carries at no more than 80 % of its breaker rating.
  * Example: 630 W at PF 0.95 on a 20 A, 240 V circuit draws 2.76 A each; 16 A / 2.76 A → 5 fixtures.
  * @returns a whole count, 0 when one fixture alone is above the continuous limit
@@ -73,7 +88,8 @@ export function fixturesPerCircuit(input: CircuitInput): number {
 }
 
 /**
- * Branch circuits a room of `fixtures` identical fixtures needs, and the load on the heaviest one.
+ * Branch circuits a room of `fixtures` identical fixtures needs, the load on the heaviest one, and
+ * the heat the whole fixtures give off.
  * A fractional (exact, leveled) count is rounded up first: one buys and wires whole fixtures.
  * @param input supply and fixture figures (W, V, A, PF)
  * @param fixtures fixtures in the room, may be fractional
@@ -92,6 +108,7 @@ export function planCircuits(input: CircuitInput, fixtures: number): CircuitPlan
     fixtures: whole,
     circuits,
     heaviestCircuitAmps: circuits === null ? null : Math.min(whole, perCircuit) * fixtureAmps,
+    heatWatts: lightingHeatWatts(whole, input.wallWatts),
   };
 }
 

@@ -25,13 +25,13 @@ export function dliFromPpfd(ppfd: Ppfd, hoursPerDay: Hours): Dli {
   return as<Dli>((ppfd * hoursPerDay * 3600) / 1e6);
 }
 
-/** Lit canopy area, m² = lengthM × widthM. */
-export function canopyArea(s: Pick<Scenario, 'canopy'>): SquareMetres {
+/** Lit canopy area, m² = lengthM × widthM (both in m). */
+export function canopyArea(s: { canopy: { lengthM: number; widthM: number } }): SquareMetres {
   return as<SquareMetres>(s.canopy.lengthM * s.canopy.widthM);
 }
 
-/** Lit hours per year, h = Σ hoursPerDay × daysPerYear over the growth phases. */
-export function litHoursPerYear(s: Pick<Scenario, 'schedule'>): Hours {
+/** Lit hours per year, h = Σ hoursPerDay (h) × daysPerYear (d) over the growth phases. */
+export function litHoursPerYear(s: { schedule: readonly { hoursPerDay: number; daysPerYear: number }[] }): Hours {
   return as<Hours>(s.schedule.reduce((sum, row) => sum + row.hoursPerDay * row.daysPerYear, 0));
 }
 

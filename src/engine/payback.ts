@@ -1,3 +1,4 @@
+import { dec } from './money';
 import type { Decimal } from './money';
 
 /**
@@ -28,4 +29,22 @@ export function paybackYears(option: readonly Decimal[], baseline: readonly Deci
     previous = current;
   }
   return null;
+}
+
+/**
+ * Cumulative cost at a fractional year, read linearly between the yearly figures (the same straight
+ * line paybackYears interpolates on), so the point at an option's payback year lies on its curve.
+ * @param cumulative cumulative cost by year 0..N, currency
+ * @param year years from the start, 0..N (clamped to that range)
+ * @returns currency, as a decimal; 0 for an empty series
+ */
+export function cumulativeAt(cumulative: readonly (Decimal | string)[], year: number): Decimal {
+  const last = cumulative.length - 1;
+  if (last < 0) return dec(0);
+  const t = Math.min(Math.max(year, 0), last);
+  const y0 = Math.floor(t);
+  const a = dec(cumulative[y0]!);
+  if (y0 === last) return a;
+  const b = dec(cumulative[y0 + 1]!);
+  return a.plus(b.minus(a).times(t - y0));
 }

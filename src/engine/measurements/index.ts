@@ -13,6 +13,7 @@ export { MAX_STEP_NM, REQUIRED_FROM_NM, REQUIRED_TO_NM, SPECTRUM_UNITS, parseSpe
 export type { Spectrum, SpectrumUnit } from './spectrum-parse';
 export { CHROMATICITY_FROM_NM, CHROMATICITY_TO_NM, FAR_RED_WINDOW_NM, RED_WINDOW_NM, SPECTRUM_BANDS, photonCurve, summariseSpectrum } from './spectrum-summary';
 export type { SpectrumSummary } from './spectrum-summary';
+export { bandPhotonFluxDensity } from './band-flux';
 export { CCT_MAX_K, CCT_MIN_K, MAX_ABS_DUV, cctFromUv, planckianUv, uvFromXy } from './cct';
 export type { Cct } from './cct';
 export { AVOGADRO_NA, LIGHT_C, PLANCK_C2, PLANCK_H, photonsFromWatts, wattsFromPhotons } from './photon';

@@ -9,6 +9,8 @@ export { checkSwingSettings, measureValue, planSwings, rankSwings, runSwings, sw
 export type { SwingPlan, SwingResult, SwingRow } from './swings';
 export { BREAKEVEN_FORMAT, breakevenDocument, breakevenEfficacy, breakevenPrice } from './breakeven';
 export type { EfficacyBreakeven, NoBreakevenReason, PriceBreakeven } from './breakeven';
+export { efficacyBreakevenFigures, presentValueGap } from './breakeven-figures';
+export type { EfficacyBreakevenFigures } from './breakeven-figures';
 export { planUncertainty, runUncertainty, summarizeUncertainty, uncertaintyDraws } from './uncertainty';
 export type { UncertaintyChunk, UncertaintyOption, UncertaintyPlan, UncertaintySummary } from './uncertainty';
 export type { DrawRoute } from './draw-route';
