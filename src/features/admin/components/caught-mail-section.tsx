@@ -45,7 +45,7 @@ export function CaughtMailSection() {
       {messages.length === 0 ? (
         <EmptyState title="No mail caught yet">Ask for a sign-in link or send an invitation, and the message shows up here.</EmptyState>
       ) : (
-        <div className="grid gap-4 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
+        <div className="grid items-start gap-4 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
           <div className="overflow-x-auto rounded-lg border border-line bg-panel">
             <table className="w-full border-collapse text-sm" aria-label="Caught messages">
               <thead>
