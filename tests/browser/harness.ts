@@ -1,4 +1,4 @@
-import { mkdirSync, mkdtempSync, rmSync, statSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { chromium } from 'playwright-core';
@@ -85,6 +85,9 @@ function statSafe(path: string): number | null {
  * port with a temporary database, and hands out isolated browser sessions.
  */
 export async function startHarness(env: Record<string, string> = {}): Promise<Harness> {
+  if (!existsSync(CHROMIUM)) {
+    throw new Error(`the browser tests need Debian's chromium at ${CHROMIUM} (apt-get install chromium, or set CHROMIUM_PATH); .ci/run installs it`);
+  }
   const root = process.cwd();
   await buildClientOnce(root);
   const dir = mkdtempSync(join(tmpdir(), 'photon-parity-browser-'));
