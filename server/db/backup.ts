@@ -75,6 +75,21 @@ export async function checkDatabaseFile(path: string): Promise<DatabaseCheck> {
 }
 
 /**
+ * The online backup copies the live file's header, which marks it as write-ahead-logged, so every
+ * later open (even read-only, as the check does) would leave `-wal` and `-shm` files beside it.
+ * A rollback journal makes the copy one self-contained file (SQLite documentation, "Write-Ahead
+ * Logging", section "Persistence of WAL mode").
+ */
+async function selfContained(path: string): Promise<void> {
+  const db = await open(path, sqlite3.OPEN_READWRITE);
+  try {
+    await exec(db, 'PRAGMA journal_mode = DELETE');
+  } finally {
+    await close(db);
+  }
+}
+
+/**
  * Copies the live database to `dest` with SQLite's online backup, safe while the server is writing;
  * the copy is checked before it replaces anything at `dest`. Uploaded files live in the database,
  * so they are part of the copy.
@@ -91,6 +106,7 @@ export async function backupDatabase(livePath: string, dest: string): Promise<Da
   } finally {
     await close(live);
   }
+  await selfContained(partial);
   const check = await checkDatabaseFile(partial);
   if (!check.ok) {
     rmSync(partial, { force: true });
