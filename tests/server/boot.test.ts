@@ -33,12 +33,25 @@ describe('server start-up', () => {
   });
 
   it('loads the demo only once, however often it starts', async () => {
+    const counts = async () => {
+      const out: Record<string, number> = {};
+      for (const table of ['app_meta', 'users', 'workspaces', 'memberships', 'fixtures', 'scenarios', 'scenario_revisions']) {
+        const [rows] = (await running.sequelize.query(`SELECT COUNT(*) AS n FROM ${table}`)) as [{ n: number }[], unknown];
+        out[table] = Number(rows[0]!.n);
+      }
+      return out;
+    };
+    const before = await counts();
     await running.close();
     const config = readConfig({ NODE_ENV: 'test', PORT: '0', HOST: '127.0.0.1', DATABASE_PATH: join(dir, 'db', 'test.sqlite') });
     running = await boot(config, createLogger('silent'));
     base = `http://127.0.0.1:${running.port}`;
     const [rows] = (await running.sequelize.query("SELECT COUNT(*) AS n FROM app_meta WHERE key = 'demo'")) as [{ n: number }[], unknown];
     expect(rows[0]!.n).toBe(1);
+    // The second start adds nothing: the demo's four accounts, its workspace and scenarios are there once.
+    expect(before.users).toBe(4);
+    expect(before.scenarios).toBeGreaterThanOrEqual(2);
+    expect(await counts()).toEqual(before);
   });
 
   it('serves the shipped example scenarios', async () => {
