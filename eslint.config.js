@@ -26,6 +26,12 @@ const engineFence = {
           { group: ['react', 'react-*', 'react/*', '@tanstack/*', 'recharts', 'jspdf*'], message: 'The engine is pure: no UI libraries.' },
           { group: ['sequelize', 'sqlite3', 'express', 'pino', 'nodemailer', 'multer'], message: 'The engine is pure: no server libraries.' },
           { group: ['**/server/**', '**/app/**', '**/features/**', '**/lib/**', '**/components/**', '**/cli/**'], message: 'The engine may import only itself and src/contracts.' },
+          {
+            // Only these packages, each pure (no I/O, no clock, no randomness): validation, decimal
+            // money, canonical JSON and SHA-256 for input hashes, CSV parsing for measurement files.
+            regex: '^(?!\\.{1,2}/)(?!(zod|decimal\\.js|canonicalize|papaparse|@noble/hashes)(/|$))',
+            message: 'The engine imports only zod, decimal.js, canonicalize, papaparse and @noble/hashes; add a pure package here after review.',
+          },
         ],
       },
     ],
