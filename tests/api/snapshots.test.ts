@@ -189,21 +189,31 @@ describe('links', () => {
     expect(reply.body.error.fields).toEqual([{ path: 'expiresAt', message: 'must be in the future' }]);
   });
 
-  it('answers an unknown id no slower than a known one (medians of 60 alternating requests, loosely)', async () => {
+  it('answers an unknown id no slower than a known one (the median of 120 paired differences, order alternating)', async () => {
     const snap = await publish(d.editor, d.wid, d.sid);
     const time = async (path: string) => {
       const start = performance.now();
       await (await fetch(`${app.base}${path}`)).arrayBuffer();
       return performance.now() - start;
     };
-    const known: number[] = [];
-    const unknown: number[] = [];
-    for (let i = 0; i < 60; i++) {
-      known.push(await time(`/api/snapshots/${snap.id}`));
-      unknown.push(await time(`/api/snapshots/${snap.id.slice(0, 20)}${snap.id.endsWith('x') ? 'y' : 'x'}`));
+    const knownPath = `/api/snapshots/${snap.id}`;
+    const unknownPath = `/api/snapshots/${snap.id.slice(0, 20)}${snap.id.endsWith('x') ? 'y' : 'x'}`;
+    const differences: number[] = [];
+    for (let i = 0; i < 120; i++) {
+      // Alternating which goes first keeps warm-up and queueing from favouring either.
+      if (i % 2 === 0) {
+        const known = await time(knownPath);
+        differences.push((await time(unknownPath)) - known);
+      } else {
+        const unknown = await time(unknownPath);
+        differences.push(unknown - (await time(knownPath)));
+      }
     }
-    const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
-    console.info(`median known ${median(known).toFixed(2)} ms, unknown ${median(unknown).toFixed(2)} ms`);
-    expect(median(unknown)).toBeLessThan(median(known) * 1.5 + 2);
+    const sorted = [...differences].sort((a, b) => a - b);
+    const median = sorted[Math.floor(sorted.length / 2)]!;
+    console.info(`unknown minus known, ms: median ${median.toFixed(3)}, quartiles ${sorted[30]!.toFixed(3)} to ${sorted[90]!.toFixed(3)}`);
+    // Both answers cost one hashed lookup; the known one also sends the body, so the unknown is at
+    // most as slow. 1 ms of slack absorbs a busy machine's jitter on the median of the pairs.
+    expect(median).toBeLessThan(1);
   });
 });
