@@ -2,6 +2,7 @@ import { jsPDF } from 'jspdf';
 import { autoTable } from 'jspdf-autotable';
 import type { Scenario } from '../../contracts/scenario';
 import { safetyNotesFor } from '../../contracts/safety-notes';
+import { shedFloatNoise } from '../../engine/entry-conversions';
 import type { ReproduceReport } from '../../engine/reproduce';
 import type { ScenarioResult } from '../../engine/result-types';
 import { drawBreakdownChart, drawCumulativeChart } from './report-charts';
@@ -104,7 +105,7 @@ export function buildReportPdf(input: ReportInput): Uint8Array {
       ['growth phases', s.schedule.map((p) => `${p.label}: ${p.hoursPerDay} h/day for ${p.daysPerYear} days`).join('; ')],
       ['leveling', `${s.levelAt} output, ${s.fixtureCount} fixture counts, utilization ${s.utilization}`],
       ['electricity', `${money(s.electricity.pricePerKwh)} per kWh, escalating ${s.electricity.escalationPctPerYear} % a year; demand ${money(s.electricity.demandChargePerKwMonth)} per kW-month`],
-      ['cooling', s.cooling ? `COP ${s.cooling.cop}, removing ${s.cooling.share * 100} % of the lighting heat` : 'not counted'],
+      ['cooling', s.cooling ? `COP ${s.cooling.cop}, removing ${shedFloatNoise(s.cooling.share * 100)} % of the lighting heat` : 'not counted'],
       ['horizon and discounting', `${s.horizonYears} years at a real discount rate of ${s.discountRatePct} %`],
       ['baseline', label(s.baseline)],
     ],

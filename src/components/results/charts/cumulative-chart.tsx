@@ -1,6 +1,7 @@
 import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { ResultViewProps } from '../results-table';
 import { TECHNOLOGY_COLOURS } from '../../technology';
+import { cumulativeAt } from '../../../engine/payback';
 import { formatMoney } from '../../../lib/format';
 
 const DASHES = ['', '6 3', '2 3', '8 3 2 3'];
@@ -23,11 +24,7 @@ export default function CumulativeChart({ scenario, result }: ResultViewProps) {
   });
   const crossings = options.flatMap((o) => {
     if (o.paybackYears === null || o.id === scenario.baseline) return [];
-    const y0 = Math.floor(o.paybackYears);
-    const frac = o.paybackYears - y0;
-    const a = Number(o.years[y0]?.cumulative ?? 0);
-    const b = Number(o.years[Math.min(y0 + 1, o.years.length - 1)]?.cumulative ?? a);
-    return [{ id: o.id, x: o.paybackYears, y: a + (b - a) * frac }];
+    return [{ id: o.id, x: o.paybackYears, y: cumulativeAt(o.years.map((y) => y.cumulative), o.paybackYears).toNumber() }];
   });
   const money = (v: number) => formatMoney(String(Math.round(v)), scenario.currency);
   return (

@@ -1,6 +1,7 @@
 import { lazy, Suspense } from 'react';
 import type { MeasurementData, SpectrumDocumentWire } from '../../../contracts/api/measurements';
 import { LoadingState } from '../../../components/ui/states';
+import { bandPhotonFluxDensity } from '../../../engine/measurements/band-flux';
 import { formatNumber } from '../../../lib/format';
 import { BANDS } from './bands';
 import { FigureList } from './figure-list';
@@ -55,7 +56,7 @@ export function SpectrumView({ spectrum: s, data, unit }: { spectrum: SpectrumDo
                 <th scope="row" className="text-left font-normal"><span className="mr-1.5 inline-block size-3 rounded-sm align-middle" style={{ background: b.tint }} aria-hidden="true" />{b.name}</th>
                 <td className="figure">{b.nm[0]}–{b.nm[1]}</td>
                 <td className="figure">{share(s.sharesPct[b.key])}</td>
-                <td className="figure">{s.ppfd === null ? '—' : formatNumber((s.ppfd * s.sharesPct[b.key]) / 100, 1)}</td>
+                <td className="figure">{s.ppfd === null ? '—' : formatNumber(bandPhotonFluxDensity(s.ppfd, s.sharesPct[b.key]), 1)}</td>
               </tr>
             ))}
           </tbody>

@@ -7,16 +7,15 @@ import { Button } from '../../../components/ui/button';
 import { Field } from '../../../components/ui/field';
 import { Select } from '../../../components/ui/input';
 import { Notice } from '../../../components/ui/notice';
+import { photonEfficacyOf } from '../../../engine/entry-conversions';
 import { ApiError, errorMessage } from '../../../lib/api-client';
 import { formatNumber } from '../../../lib/format';
 import { useApplyMeasurement } from '../api/apply-measurement';
 import { useFixtureChoices } from '../api/get-fixture-choices';
 
-const efficacyOf = (f: Fixture) => f.photonEfficacy ?? (f.ppf !== undefined ? f.ppf / f.wallWatts : null);
-
 function WhatChanges({ m, f }: { m: Measurement; f: Fixture | undefined }) {
   if (m.grid) {
-    const now = f ? efficacyOf(f) : null;
+    const now = f ? photonEfficacyOf(f) : null;
     return (
       <p className="text-sm">
         Sets the fixture's photon efficacy to <strong className="figure">{formatNumber(m.grid.efficacyAtCanopy ?? 0, 2)} µmol/J</strong>, the efficacy at the canopy

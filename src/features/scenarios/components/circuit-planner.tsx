@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import type { Scenario } from '../../../contracts/scenario';
 import type { ScenarioResult } from '../../../engine/result-types';
-import { planCircuits } from '../../../engine/circuits';
+import { continuousLimit, planCircuits } from '../../../engine/circuits';
 import { displayHeat } from '../../../engine/units-convert';
 import type { UnitSystem } from '../../../engine/units-convert';
 import { SafetyNotes } from '../../../components/safety-notes';
@@ -58,7 +58,7 @@ export function CircuitPlanner({ scenario, result, unitSystem }: { scenario: Sce
                 const o = scenario.options.find((x) => x.id === r.id);
                 if (!o) return null;
                 const plan = planCircuits({ wallWatts: o.wallWatts, volts, breakerAmps: breaker, powerFactor: pf }, r.fixturesUsed);
-                const heat = displayHeat(r.fixturesUsed * o.wallWatts, unitSystem);
+                const heat = displayHeat(plan.heatWatts, unitSystem);
                 return (
                   <tr key={r.id} className="border-b border-line text-right">
                     <th scope="row" className="py-1 text-left font-normal">{o.label}</th>
@@ -73,7 +73,7 @@ export function CircuitPlanner({ scenario, result, unitSystem }: { scenario: Sce
             </tbody>
           </table>
           <p className="mt-1 text-xs text-ink-soft">
-            A {breaker} A breaker carries at most {formatNumber(breaker * 0.8, 1)} A of continuous load (80 %, NEC 210.19(A)(1) and 210.20(A)); current each = W ÷ (V × power factor).
+            A {breaker} A breaker carries at most {formatNumber(continuousLimit(breaker), 1)} A of continuous load (80 %, NEC 210.19(A)(1) and 210.20(A)); current each = W ÷ (V × power factor).
           </p>
         </div>
       )}

@@ -1,8 +1,8 @@
 import type { Scenario } from '../../../contracts/scenario';
-import { compileFast, fastPresentValue } from '../../../engine/fast-path';
-import { fixtureFlux } from '../../../engine/leveling';
+import { photonEfficacyOf } from '../../../engine/entry-conversions';
 import { breakevenEfficacy, breakevenPrice } from '../../../engine/sensitivity/breakeven';
 import type { EfficacyBreakeven, PriceBreakeven } from '../../../engine/sensitivity/breakeven';
+import { presentValueGap } from '../../../engine/sensitivity/breakeven-figures';
 import { optionIndexOf } from '../../../engine/sensitivity/checks';
 
 /** Break-even figures for one pair of options, with what a reader needs to put them in sentences. */
@@ -12,9 +12,9 @@ export interface BreakevenReport {
   price: PriceBreakeven;
   /** year-1 price of the scenario, per kWh */
   currentPrice: number;
-  /** PV(a) − PV(b) at the scenario's price and at a price of 0, currency (fast path) */
-  gapNow: number;
-  gapAtZero: number;
+  /** PV(a) − PV(b) at the scenario's price and at a price of 0, currency as decimal text (decimal ledger) */
+  gapNow: string;
+  gapAtZero: string;
   /** the multiplier on a's efficacy that makes a no dearer than b, and the other way round */
   aAgainstB: EfficacyBreakeven;
   bAgainstA: EfficacyBreakeven;
@@ -41,23 +41,20 @@ export function breakevenSteps(s: Scenario, a: string, b: string): { steps: Arra
   ];
   const report = (): BreakevenReport => {
     if (!price || !aAgainstB || !bAgainstA) throw new Error('the break-even steps have not all run');
-    const fast = compileFast(s);
-    const ia = optionIndexOf(s, a);
-    const ib = optionIndexOf(s, b);
-    const gap = (p: number) => fastPresentValue(fast, ia, p) - fastPresentValue(fast, ib, p);
-    const oa = s.options[ia]!;
-    const ob = s.options[ib]!;
+    const oa = s.options[optionIndexOf(s, a)]!;
+    const ob = s.options[optionIndexOf(s, b)]!;
     return {
       a,
       b,
       price,
-      currentPrice: fast.pricePerKwh,
-      gapNow: gap(fast.pricePerKwh),
-      gapAtZero: gap(0),
+      currentPrice: Number(s.electricity.pricePerKwh),
+      gapNow: presentValueGap(s, a, b).toString(),
+      gapAtZero: presentValueGap(s, a, b, '0').toString(),
       aAgainstB,
       bAgainstA,
-      efficacyA: fixtureFlux(oa) / oa.wallWatts,
-      efficacyB: fixtureFlux(ob) / ob.wallWatts,
+      // A parsed option has exactly one of photonEfficacy and ppf, and wallWatts > 0, so neither is null.
+      efficacyA: photonEfficacyOf(oa)!,
+      efficacyB: photonEfficacyOf(ob)!,
     };
   };
   return { steps, report };

@@ -1,3 +1,4 @@
+import { useRef } from 'react';
 import { useFormContext, useWatch } from 'react-hook-form';
 import type { OptionInput, ScenarioInput } from '../../../../contracts/scenario';
 import { Badge } from '../../../../components/ui/badge';
@@ -5,6 +6,8 @@ import { Button } from '../../../../components/ui/button';
 import { TECHNOLOGY_SHORT } from '../../../../components/technology';
 import { Field } from '../../../../components/ui/field';
 import { Select } from '../../../../components/ui/input';
+import { convertOutput, switchEntry } from '../../../../engine/entry-conversions';
+import type { EntrySwitch, OutputMode } from '../../../../engine/entry-conversions';
 import { MoneyField, NumberField, SelectField, TextField } from './form-kit';
 import type { LibraryEntry } from './library-entry';
 import { overriddenFields } from './library-entry';
@@ -23,21 +26,25 @@ export function OptionCard({ index, currency, canEdit, canRemove, onRemove, entr
   const { setValue, getValues } = useFormContext<ScenarioInput>();
   const base = `options.${index}` as const;
   const option = useWatch<ScenarioInput, `options.${number}`>({ name: base }) as OptionInput | undefined;
+  const lastSwitch = useRef<EntrySwitch<OutputMode> | undefined>(undefined);
   if (!option) return null;
   const outputBy = option.ppf !== undefined ? 'ppf' : 'efficacy';
   const overrides = entry ? overriddenFields(option, entry.option) : [];
   const set = (path: string, value: unknown) => setValue(path as never, value as never, { shouldDirty: true, shouldValidate: true });
 
-  const switchOutput = (next: string) => {
+  // Switching straight back restores the figure typed, not a rounded conversion.
+  const switchOutput = (next: OutputMode) => {
+    if (next === outputBy) return;
     const o = getValues(base);
     const w = Number(o.wallWatts);
-    if (next === 'ppf') {
-      set(`${base}.ppf`, o.photonEfficacy !== undefined && w > 0 ? Math.round(o.photonEfficacy * w) : undefined);
-      set(`${base}.photonEfficacy`, undefined);
-    } else {
-      set(`${base}.photonEfficacy`, o.ppf !== undefined && w > 0 ? Number((o.ppf / w).toFixed(3)) : undefined);
-      set(`${base}.ppf`, undefined);
+    const typed = outputBy === 'ppf' ? o.ppf : o.photonEfficacy;
+    let value: number | undefined;
+    if (typeof typed === 'number' && Number.isFinite(typed) && w > 0) {
+      lastSwitch.current = switchEntry(typed, outputBy, w, convertOutput, lastSwitch.current);
+      value = lastSwitch.current.converted;
     }
+    set(next === 'ppf' ? `${base}.ppf` : `${base}.photonEfficacy`, value);
+    set(next === 'ppf' ? `${base}.photonEfficacy` : `${base}.ppf`, undefined);
   };
 
   return (
@@ -54,7 +61,7 @@ export function OptionCard({ index, currency, canEdit, canRemove, onRemove, entr
         <SelectField name={`${base}.technology`} label="Technology" options={TECH_OPTIONS} />
         <NumberField name={`${base}.wallWatts`} label="Wall power" unit="W" hint="Ballast or driver included." />
         <Field label="Light output given as">
-          <Select value={outputBy} onChange={(e) => switchOutput(e.target.value)} disabled={!canEdit}>
+          <Select value={outputBy} onChange={(e) => switchOutput(e.target.value as OutputMode)} disabled={!canEdit}>
             <option value="efficacy">efficacy</option>
             <option value="ppf">PPF</option>
           </Select>

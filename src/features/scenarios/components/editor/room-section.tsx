@@ -1,8 +1,10 @@
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import { useController, useFormContext, useWatch } from 'react-hook-form';
 import type { ScenarioInput } from '../../../../contracts/scenario';
 import { Field } from '../../../../components/ui/field';
-import { dliFromPpfd, ppfdFromDli } from '../../../../engine/leveling';
+import { convertTarget, switchEntry } from '../../../../engine/entry-conversions';
+import type { EntrySwitch, TargetMode } from '../../../../engine/entry-conversions';
+import { canopyArea, dliFromPpfd, ppfdFromDli } from '../../../../engine/leveling';
 import type { Dli, Hours, Ppfd } from '../../../../engine/units';
 import { feetToMetres, metresToFeet, squareMetresToSquareFeet } from '../../../../engine/units-convert';
 import type { UnitSystem } from '../../../../engine/units-convert';
@@ -46,21 +48,22 @@ export function RoomSection({ unitSystem }: { unitSystem: UnitSystem }) {
   const [length, width, target, schedule] = useWatch<ScenarioInput, ['canopy.lengthM', 'canopy.widthM', 'target', 'schedule']>({
     name: ['canopy.lengthM', 'canopy.widthM', 'target', 'schedule'],
   });
-  const mode: 'ppfd' | 'dli' = target?.dli !== undefined ? 'dli' : 'ppfd';
+  const mode: TargetMode = target?.dli !== undefined ? 'dli' : 'ppfd';
+  const lastSwitch = useRef<EntrySwitch<TargetMode> | undefined>(undefined);
   const hours = schedule?.length === 1 ? schedule[0]?.hoursPerDay : undefined;
-  const area = typeof length === 'number' && typeof width === 'number' ? length * width : undefined;
+  const area = typeof length === 'number' && typeof width === 'number' ? canopyArea({ canopy: { lengthM: length, widthM: width } }) : undefined;
 
-  const switchMode = (next: 'ppfd' | 'dli') => {
+  // Switching straight back restores the figure typed (295.14 stays 295.14), not a rounded conversion.
+  const switchMode = (next: TargetMode) => {
     if (next === mode) return;
-    const t = getValues('target');
+    const typed = getValues('target')?.[mode];
     const h = getValues('schedule')?.[0]?.hoursPerDay;
-    if (next === 'dli') {
-      const dli = t?.ppfd !== undefined && typeof h === 'number' ? Number(dliFromPpfd(t.ppfd as Ppfd, h as Hours).toFixed(2)) : undefined;
-      setValue('target', { dli }, { shouldValidate: true, shouldDirty: true });
-    } else {
-      const ppfd = t?.dli !== undefined && typeof h === 'number' ? Math.round(ppfdFromDli(t.dli as Dli, h as Hours)) : undefined;
-      setValue('target', { ppfd }, { shouldValidate: true, shouldDirty: true });
+    let value: number | undefined;
+    if (typeof typed === 'number' && typeof h === 'number') {
+      lastSwitch.current = switchEntry(typed, mode, h, convertTarget, lastSwitch.current);
+      value = lastSwitch.current.converted;
     }
+    setValue('target', next === 'dli' ? { dli: value } : { ppfd: value }, { shouldValidate: true, shouldDirty: true });
   };
 
   return (

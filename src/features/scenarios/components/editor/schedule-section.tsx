@@ -1,6 +1,7 @@
 import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import type { ScenarioInput } from '../../../../contracts/scenario';
 import { Button } from '../../../../components/ui/button';
+import { litHoursPerYear } from '../../../../engine/leveling';
 import { formatNumber } from '../../../../lib/format';
 import { Group, NumberField, TextField, useFieldError } from './form-kit';
 
@@ -10,7 +11,8 @@ export function ScheduleSection({ canEdit }: { canEdit: boolean }) {
   const { fields, append, remove } = useFieldArray({ control, name: 'schedule' });
   const rows = useWatch<ScenarioInput, 'schedule'>({ name: 'schedule' });
   const listError = useFieldError('schedule', 'The growth phases');
-  const hours = (rows ?? []).reduce((s, r) => s + (Number(r?.hoursPerDay) || 0) * (Number(r?.daysPerYear) || 0), 0);
+  // Half-typed rows count as 0 h until they hold numbers.
+  const hours = litHoursPerYear({ schedule: (rows ?? []).map((r) => ({ hoursPerDay: Number(r?.hoursPerDay) || 0, daysPerYear: Number(r?.daysPerYear) || 0 })) });
   return (
     <Group
       title="Growth phases"

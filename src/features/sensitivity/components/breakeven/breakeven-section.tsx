@@ -1,6 +1,7 @@
 import { useMemo } from 'react';
 import type { Scenario } from '../../../../contracts/scenario';
 import { Panel } from '../../../../components/ui/panel';
+import { dec } from '../../../../engine/money';
 import { useAnalysisRun } from '../../hooks/use-analysis-run';
 import type { BreakevenDraft } from '../../lib/analysis-settings';
 import { breakevenErrors, breakevenFromDraft } from '../../lib/draft-settings';
@@ -24,8 +25,8 @@ export function BreakevenSection({ scenario, draft, onDraft }: { scenario: Scena
       {r ? (
         <div className="mt-1 max-w-3xl space-y-2 text-sm" data-testid="breakeven-result">
           <PriceSentences r={r} scenario={scenario} />
-          <EfficacySentence e={r.aAgainstB} scenario={scenario} efficacy={r.efficacyA} gapNow={r.gapNow} />
-          <EfficacySentence e={r.bAgainstA} scenario={scenario} efficacy={r.efficacyB} gapNow={-r.gapNow} />
+          <EfficacySentence e={r.aAgainstB} scenario={scenario} efficacy={r.efficacyA} noDearerNow={!dec(r.gapNow).gt(0)} />
+          <EfficacySentence e={r.bAgainstA} scenario={scenario} efficacy={r.efficacyB} noDearerNow={!dec(r.gapNow).lt(0)} />
         </div>
       ) : null}
     </Panel>

@@ -1,6 +1,8 @@
 import type { Scenario } from '../../../../contracts/scenario';
 import { MAX_PHOTON_EFFICACY } from '../../../../contracts/scenario';
+import { dec } from '../../../../engine/money';
 import type { EfficacyBreakeven } from '../../../../engine/sensitivity/breakeven';
+import { efficacyBreakevenFigures } from '../../../../engine/sensitivity/breakeven-figures';
 import { formatMoney, formatNumber } from '../../../../lib/format';
 import { optionLabel } from '../../lib/labels';
 import type { BreakevenReport } from '../../worker/breakeven-report';
@@ -12,9 +14,11 @@ export function PriceSentences({ r, scenario }: { r: BreakevenReport; scenario: 
   const c = scenario.currency;
   const A = optionLabel(scenario, r.a);
   const B = optionLabel(scenario, r.b);
-  const cheaperLow = r.gapAtZero < 0 ? A : B;
-  const dearerLow = r.gapAtZero < 0 ? B : A;
-  const nowCheaper = r.gapNow < 0 ? A : B;
+  const gapNow = dec(r.gapNow);
+  const aCheaperAtZero = dec(r.gapAtZero).lt(0);
+  const cheaperLow = aCheaperAtZero ? A : B;
+  const dearerLow = aCheaperAtZero ? B : A;
+  const nowCheaper = gapNow.lt(0) ? A : B;
   const years = scenario.horizonYears;
   const p = r.price;
   return (
@@ -33,9 +37,9 @@ export function PriceSentences({ r, scenario }: { r: BreakevenReport; scenario: 
           <em>{A}</em> and <em>{B}</em> would cost the same only at a price below 0 or above 100 {c} per kWh; at every price in between, {cheaperLow} costs less.
         </p>
       )}
-      {r.gapNow !== 0 ? (
+      {!gapNow.isZero() ? (
         <p>
-          At the scenario’s own price, {nowCheaper} costs <F>{formatMoney(String(Math.abs(r.gapNow)), c)}</F> less in present value.
+          At the scenario’s own price, {nowCheaper} costs <F>{formatMoney(gapNow.abs().toString(), c)}</F> less in present value.
         </p>
       ) : null}
       {p.pricePerKwh !== null ? (
@@ -49,27 +53,28 @@ export function PriceSentences({ r, scenario }: { r: BreakevenReport; scenario: 
 }
 
 /** How far one option's efficacy would have to move for it to cost no more than the other, in a sentence. */
-export function EfficacySentence({ e, scenario, efficacy, gapNow }: { e: EfficacyBreakeven; scenario: Scenario; efficacy: number; gapNow: number }) {
+export function EfficacySentence({ e, scenario, efficacy, noDearerNow }: { e: EfficacyBreakeven; scenario: Scenario; efficacy: number; noDearerNow: boolean }) {
   const V = optionLabel(scenario, e.vary);
   const O = optionLabel(scenario, e.against);
   const [, hi] = e.searched;
-  if (e.factor === null) {
-    return gapNow <= 0 ? (
+  const f = efficacyBreakevenFigures(e, efficacy);
+  if (e.factor === null || f.breakevenEfficacy === null || f.changePct === null) {
+    return noDearerNow ? (
       <p>{V} costs no more than {O} even at ×<F>{formatNumber(e.searched[0], 2)}</F> of its photon efficacy.</p>
     ) : (
       <p>
-        Even at ×<F>{formatNumber(hi, 3)}</F> of its photon efficacy ({formatNumber(efficacy * hi, 2)} µmol/J
-        {hi * efficacy >= MAX_PHOTON_EFFICACY - 1e-9 ? `, the physical limit of ${MAX_PHOTON_EFFICACY} µmol/J for 400–700 nm` : ''}), {V} still costs more than {O}.
+        Even at ×<F>{formatNumber(hi, 3)}</F> of its photon efficacy ({formatNumber(f.topEfficacy, 2)} µmol/J
+        {f.topIsPhysicalLimit ? `, the physical limit of ${MAX_PHOTON_EFFICACY} µmol/J for 400–700 nm` : ''}), {V} still costs more than {O}.
       </p>
     );
   }
-  const change = e.factor < 1
-    ? `could lose ${formatNumber(100 * (1 - e.factor), 1)} % of its photon efficacy and still cost no more than`
-    : `would need ${formatNumber(100 * (e.factor - 1), 1)} % more photon efficacy to cost no more than`;
+  const change = f.changePct < 0
+    ? `could lose ${formatNumber(-f.changePct, 1)} % of its photon efficacy and still cost no more than`
+    : `would need ${formatNumber(f.changePct, 1)} % more photon efficacy to cost no more than`;
   return (
     <p>
       {V} {change} {O} at the scenario’s price: the break-even multiplier is ×<F>{formatNumber(e.factor, 4)}</F>, that is{' '}
-      <F>{formatNumber(efficacy * e.factor, 3)}</F> µmol/J instead of <F>{formatNumber(efficacy, 3)}</F>.
+      <F>{formatNumber(f.breakevenEfficacy, 3)}</F> µmol/J instead of <F>{formatNumber(efficacy, 3)}</F>.
       {e.kind === 'step' ? ' With whole fixtures the cost falls in steps, so the two are never exactly equal; this is the step at which the count drops far enough.' : ''}
     </p>
   );
