@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { errorBodySchema } from '../../src/contracts/api/errors';
 import type { Role } from '../../src/contracts/api/common';
 import type { ApiClient, ApiReply } from '../helpers/api-client';
-import { NOT_API, OUTSIDE_ROUTER, answeredOutsideRouter, appRoutes } from '../helpers/route-list';
+import { NOT_API, OUTSIDE_ROUTER, answeredOutsideRouter, appRoutes, fillRoute as fill } from '../helpers/route-list';
 import type { RouteKey } from '../helpers/route-list';
 import { sampleScenario, seedInvitationFor, seedWorkspace } from '../helpers/seed';
 import { demoAccount, startTestApp, TEST_PASSWORD } from '../helpers/test-app';
@@ -22,7 +22,8 @@ type Params = Record<string, string>;
 interface Case {
   route: RouteKey;
   need: Need;
-  ok: number;
+  /** The success status; a function when it depends on the machine, read right after the reply. */
+  ok: number | (() => number);
   body?: (p: Params, actor: Actor) => unknown;
   headers?: Record<string, string>;
   /** Per-actor preparation returning parameter overrides (e.g. an invitation addressed to this actor). */
@@ -35,12 +36,13 @@ const RANK: Record<Role, number> = { viewer: 1, editor: 2, owner: 3 };
 
 /** The status the product promises: 401 anonymous, 404 outside the workspace, 403 below the role. */
 function expected(c: Case, actor: Actor): number {
-  if (c.need === 'anyone') return c.ok;
+  const ok = typeof c.ok === 'number' ? c.ok : c.ok();
+  if (c.need === 'anyone') return ok;
   if (actor === 'anonymous') return 401;
-  if (c.need === 'signed-in') return c.ok;
-  if (c.need === 'site-admin') return actor === 'admin' ? c.ok : 403;
+  if (c.need === 'signed-in') return ok;
+  if (c.need === 'site-admin') return actor === 'admin' ? ok : 403;
   if (actor === 'outsider' || actor === 'admin') return 404;
-  return RANK[actor] >= RANK[c.need] ? c.ok : 403;
+  return RANK[actor] >= RANK[c.need] ? ok : 403;
 }
 
 const analysisSettings = {
@@ -51,8 +53,8 @@ const analysisSettings = {
   uncertainty: { seed: '42', draws: '100', inputs: [] },
 };
 const csv = 'key,label,technology,wallWatts,photonEfficacy,fixturePrice\nimported-led,Imported LED,led,320,2.7,410\n';
-/** The web app's page for a live link is dist/index.html; without a built client the request falls through to 404. */
-const clientBuilt = existsSync(join(process.cwd(), 'dist', 'index.html'));
+/** The web app's page for a live link is dist/index.html; without a built client (or while a build rewrites dist) the request falls through to 404. */
+const clientBuilt = () => existsSync(join(process.cwd(), 'dist', 'index.html'));
 const inADay = () => new Date(Date.now() + 86_400_000).toISOString();
 
 let app: TestApp;
@@ -137,7 +139,7 @@ const CASES: Case[] = [
   { route: 'GET /api/snapshots/:id/totals.csv', need: 'anyone', ok: 200 },
   { route: 'GET /api/snapshots/:id/ledger.csv', need: 'anyone', ok: 200 },
   { route: 'GET /api/snapshots/:id/report.pdf', need: 'anyone', ok: 200 },
-  { route: 'GET /s/:id', need: 'anyone', ok: clientBuilt ? 200 : 404 },
+  { route: 'GET /s/:id', need: 'anyone', ok: () => (clientBuilt() ? 200 : 404) },
   // Forking copies into the workspace named in the body: editor there or better; not a member there is 404.
   { route: 'POST /api/snapshots/:id/fork', need: 'editor', ok: 201, body: (p) => ({ workspaceId: p.wid, title: 'Forked in the matrix' }) },
   { route: 'GET /api/workspaces/:wid/measurements', need: 'viewer', ok: 200 },
@@ -175,8 +177,6 @@ async function seed(route: RouteKey): Promise<Params> {
   }
   return p;
 }
-
-const fill = (route: RouteKey, p: Params) => route.slice(route.indexOf(' ') + 1).replace(/:(\w+)/g, (_, name: string) => p[name] ?? `missing-${name}`);
 
 beforeAll(async () => {
   app = await startTestApp();

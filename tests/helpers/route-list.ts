@@ -71,6 +71,11 @@ export function appRoutes(sequelize: Sequelize): RouteKey[] {
   }
 }
 
+/** The request path of a route with each `:param` replaced by its value (a missing one stays visible). */
+export function fillRoute(route: RouteKey, params: Record<string, string>): string {
+  return route.slice(route.indexOf(' ') + 1).replace(/:(\w+)/g, (_, name: string) => params[name] ?? `missing-${name}`);
+}
+
 /** The routes that write (every method but GET), for the fuzz tests. */
 export function writeRoutes(routes: RouteKey[]): RouteKey[] {
   return routes.filter((r) => !r.startsWith('GET '));
