@@ -9,10 +9,12 @@ import { Notice } from '../../../../components/ui/notice';
 import { ApiError, errorMessage } from '../../../../lib/api-client';
 import type { WorkspaceScope } from '../../../../lib/workspace-context';
 import { useUpdateScenario } from '../../api/update-scenario';
+import { threeWayMerge, settle } from '../../merge/three-way-merge';
 import { useUndoableForm } from '../../hooks/use-undoable-form';
 import { LiveResults } from '../live-results';
 import { LeaveGuard } from './leave-guard';
 import { ConflictNotice } from './conflict-notice';
+import type { MergedSave } from './conflict-notice';
 import { CostsSection } from './costs-section';
 import { EditorToolbar } from './editor-toolbar';
 import { Group, TextField } from './form-kit';
@@ -47,7 +49,9 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
   const [revision, setRevision] = useState(record.revision);
   const [saved, setSaved] = useState(() => snapshot(form.getValues()));
   const [dirty, setDirty] = useState(false);
-  const [conflict, setConflict] = useState<string | null>(null);
+  // The stored document of `revision`: the common ancestor when someone else saves in the meantime.
+  const [base, setBase] = useState<Scenario>(record.document);
+  const [conflict, setConflict] = useState<{ message: string; theirs?: ScenarioRecord } | null>(null);
   const [invalidOnSave, setInvalidOnSave] = useState(false);
 
   useEffect(
@@ -61,6 +65,23 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
     return () => window.removeEventListener('beforeunload', warn);
   }, [dirty]);
 
+  const fetchLatest = useCallback(async () => {
+    try {
+      return await onLoadLatest();
+    } catch (e) {
+      setConflict({ message: `The newest revision could not be loaded: ${errorMessage(e)}` });
+      return undefined;
+    }
+  }, [onLoadLatest]);
+  const showConflict = useCallback(
+    async (message: string) => {
+      setConflict({ message });
+      const theirs = await fetchLatest();
+      if (theirs) setConflict((c) => c && { ...c, theirs });
+    },
+    [fetchLatest],
+  );
+
   const save = useCallback(
     (atRevision = revision) => {
       if (!scope.canEdit) return;
@@ -73,6 +94,7 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
             {
               onSuccess: (r) => {
                 setRevision(r.scenario.revision);
+                setBase(r.scenario.document);
                 setSaved(sent);
                 setDirty(snapshot(form.getValues()) !== sent);
                 setConflict(null);
@@ -80,7 +102,7 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
               onError: (e) => {
                 if (e instanceof ApiError && e.code === 'conflict') {
                   const current = /\d+/.exec(e.fields.find((f) => f.path === 'revision')?.message ?? '')?.[0];
-                  setConflict(current ? `Revision ${current} was saved while you were editing revision ${atRevision}.` : e.message);
+                  void showConflict(current ? `Revision ${current} was saved while you were editing revision ${atRevision}.` : e.message);
                 }
                 if (e instanceof ApiError) for (const f of e.fields) if (f.path !== 'revision') form.setError(formPath(f.path.replace(/^document\./, '')) as Path<ScenarioInput>, { message: f.message });
               },
@@ -90,29 +112,32 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
         () => setInvalidOnSave(true),
       )();
     },
-    [form, record.id, revision, scope.canEdit, scope.workspaceId, update],
+    [form, record.id, revision, scope.canEdit, scope.workspaceId, showConflict, update],
   );
 
-  const fetchLatest = async () => {
-    try {
-      return await onLoadLatest();
-    } catch (e) {
-      setConflict(`The newest revision could not be loaded: ${errorMessage(e)}`);
-      return undefined;
-    }
-  };
   const loadLatest = async () => {
     const latest = await fetchLatest();
     if (!latest) return;
     history.restart(latest.document);
     setRevision(latest.revision);
+    setBase(latest.document);
     setSaved(snapshot(form.getValues()));
     setDirty(false);
     setConflict(null);
+    update.reset();
   };
-  const saveOver = async () => {
-    const latest = await fetchLatest();
-    if (latest) save(latest.revision);
+  const mergedSaved = ({ record: stored, valuesAtSend }: MergedSave) => {
+    const now = form.getValues();
+    // Keystrokes typed while the merged save was in flight are newer than anything stored: they win.
+    const typedSince = snapshot(now) !== snapshot(valuesAtSend);
+    history.restart(typedSince ? (settle(threeWayMerge(valuesAtSend, now, stored.document), {}) as ScenarioInput) : stored.document);
+    setRevision(stored.revision);
+    setBase(stored.document);
+    const storedValues = typedSince ? snapshot(stored.document) : snapshot(form.getValues());
+    setSaved(storedValues);
+    setDirty(snapshot(form.getValues()) !== storedValues);
+    setConflict(null);
+    update.reset();
   };
 
   return (
@@ -124,10 +149,22 @@ export function ScenarioEditor({ record, scope, library, historyHref, onLoadLate
           <p className="text-sm text-ink-soft">You can read this scenario and its results; only editors and owners change it. Revision {revision}.</p>
         )}
         {scope.canEdit ? <LeaveGuard dirty={dirty} /> : null}
-        {conflict ? <ConflictNotice message={conflict} onLoadLatest={() => void loadLatest()} onSaveOver={() => void saveOver()} /> : null}
         {update.isError && !conflict ? <Notice tone="error" className="mt-2">Not saved: {errorMessage(update.error)} Your changes are still here.</Notice> : null}
         {invalidOnSave ? <Notice tone="error" className="mt-2">Not saved: some fields need attention; each one says what is wrong beside it.</Notice> : null}
       </div>
+      {conflict ? (
+        <ConflictNotice
+          key={conflict.theirs?.revision ?? 'loading'}
+          message={conflict.message}
+          base={base}
+          theirs={conflict.theirs}
+          wid={scope.workspaceId}
+          sid={record.id}
+          onLoadLatest={() => void loadLatest()}
+          onMergedSave={mergedSaved}
+          onConflictAgain={(message) => void showConflict(message)}
+        />
+      ) : null}
       <div className="grid items-start gap-4 lg:grid-cols-[minmax(20rem,27rem)_minmax(0,1fr)]">
         <form noValidate onSubmit={(e) => e.preventDefault()} aria-label="Scenario inputs">
           <fieldset disabled={!scope.canEdit} className="space-y-3">
