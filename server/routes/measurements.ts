@@ -78,8 +78,8 @@ export function measurementsRouter({ m, sequelize }: ApiDeps): Router {
     res.attachment(file.fileName).type('text/csv; charset=utf-8').send(file.content);
   });
   router.post('/:mid/apply', editors, async (req, res) => {
-    const { fixtureId } = parseBody(applyMeasurementRequestSchema, req, { optional: true });
-    res.json(await applyMeasurement(m, accessOf(req).workspace.id, idParam(req, 'mid'), fixtureId, requireCaller(req).user.id));
+    const { fixtureId, shareOnArea } = parseBody(applyMeasurementRequestSchema, req, { optional: true });
+    res.json(await applyMeasurement(m, accessOf(req).workspace.id, idParam(req, 'mid'), fixtureId, requireCaller(req).user.id, shareOnArea));
   });
   router.delete('/:mid', editors, async (req, res) => {
     const head = await found(accessOf(req).workspace.id, idParam(req, 'mid'));

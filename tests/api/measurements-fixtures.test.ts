@@ -53,6 +53,21 @@ describe('feeding a library fixture from a measurement', () => {
     expect(stored.wallWatts).toBe(target.wallWatts);
   });
 
+  it('divides the canopy efficacy by the share of photons that landed on the measured area, and names a share out of range', async () => {
+    const target = fixtures[5]!;
+    const m = await uploaded({ kind: 'grid', areaM2: 1.44, wallWatts: 400 }, 'open-room.csv', GRID_3X3);
+    for (const shareOnArea of [0, 1.2, 'most']) {
+      const refused = await editor.post(api(`/measurements/${m.id}/apply`), { fixtureId: target.id, shareOnArea });
+      expect(refused.status).toBe(400);
+      expect(refused.body.error.fields.map((p: { path: string }) => p.path)).toEqual(['shareOnArea']);
+    }
+    expect((await fixture(target.id)).dataSource).toBe(target.dataSource);
+    const reply = await editor.post(api(`/measurements/${m.id}/apply`), { fixtureId: target.id, shareOnArea: 0.8 });
+    expect(reply.status, reply.text).toBe(200);
+    // 600 µmol m⁻² s⁻¹ × 1.44 m² / 400 W = 2.16 µmol/J at the canopy; 2.16 / 0.8 = 2.7 µmol/J for the fixture.
+    expect((await fixture(target.id)).photonEfficacy).toBeCloseTo(2.7, 12);
+  });
+
   it('sets the fixture’s spectrum summary from a spectrum: the four shares and the CCT', async () => {
     const target = fixtures[1]!;
     const m = await uploaded({ kind: 'spectrum', unit: 'w' }, 'planck.csv', PLANCK_2856);

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { gridDocument, parsePpfdGridCsv, readPpfdGrid, summarisePpfdGrid } from '../../src/engine';
-import type { SquareMetres, Watts } from '../../src/engine/units';
+import { fixtureEfficacyFromCanopy, gridDocument, parsePpfdGridCsv, readPpfdGrid, summarisePpfdGrid } from '../../src/engine';
+import { as } from '../../src/engine/units';
+import type { Fraction, MicromolePerJoule, SquareMetres, Watts } from '../../src/engine/units';
 
 const MATRIX = '400,450,500\n550,600,650\n700,750,800\n';
 const POINTS = 'x,y,ppfd\n0,0,400\n0.5,0,450\n1,0,500\n0,0.5,550\n0.5,0.5,600\n1,0.5,650\n0,1,700\n0.5,1,750\n1,1,800\n';
@@ -88,5 +89,14 @@ describe('PPFD grid summary', () => {
         expect(s.minOverMean).toBeLessThanOrEqual(1 + 1e-12);
       }),
     );
+  });
+});
+
+describe('fixtureEfficacyFromCanopy', () => {
+  it('divides the efficacy at the canopy by the share of photons on the measured area, and refuses a share outside (0, 1]', () => {
+    // 2.16 µmol/J measured with 80 % of the photons on the area: the fixture gives 2.7 µmol/J (η = η_canopy / share).
+    expect(fixtureEfficacyFromCanopy(as<MicromolePerJoule>(2.16), as<Fraction>(0.8))).toBeCloseTo(2.7, 12);
+    expect(fixtureEfficacyFromCanopy(as<MicromolePerJoule>(2.16), as<Fraction>(1))).toBe(2.16);
+    for (const bad of [0, -0.5, 1.01, Number.NaN]) expect(() => fixtureEfficacyFromCanopy(as<MicromolePerJoule>(2), as<Fraction>(bad))).toThrow(RangeError);
   });
 });

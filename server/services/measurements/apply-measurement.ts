@@ -1,4 +1,7 @@
 import { fixtureFieldsSchema } from '../../../src/contracts/api/fixtures';
+import { fixtureEfficacyFromCanopy } from '../../../src/engine';
+import { as } from '../../../src/engine/units';
+import type { Fraction, MicromolePerJoule } from '../../../src/engine/units';
 import type { Fixture } from '../../../src/contracts/api/fixtures';
 import type { Measurement } from '../../../src/contracts/api/measurements';
 import { check } from '../../../src/contracts/problems';
@@ -11,8 +14,12 @@ import { measurementView } from './measurement-view';
 import { readStoredSummary } from './stored-summary';
 import type { StoredSummary } from './stored-summary';
 
-/** The fixture fields a measurement sets: efficacy at the canopy from a grid, the spectrum summary from a spectrum. */
-function measuredFields(summary: StoredSummary): Record<string, unknown> {
+/**
+ * The fixture fields a measurement sets: from a grid, the fixture's efficacy (the efficacy at the
+ * canopy over the share of its photons that landed on the measured area); from a spectrum, the
+ * spectrum summary.
+ */
+function measuredFields(summary: StoredSummary, shareOnArea: number): Record<string, unknown> {
   if (summary.grid) {
     const efficacy = summary.grid.efficacyAtCanopy;
     if (efficacy === undefined) {
@@ -20,7 +27,7 @@ function measuredFields(summary: StoredSummary): Record<string, unknown> {
         { path: '(measurement)', message: 'needs areaM2 and wallWatts to give an efficacy at the canopy' },
       ]);
     }
-    return { photonEfficacy: efficacy, ppf: undefined };
+    return { photonEfficacy: fixtureEfficacyFromCanopy(as<MicromolePerJoule>(efficacy), as<Fraction>(shareOnArea)), ppf: undefined };
   }
   if (!summary.spectrum) throw new Error('a stored summary holds neither a grid nor a spectrum');
   const { blue, green, red, farRed } = summary.spectrum.sharesPct;
@@ -39,6 +46,7 @@ export async function applyMeasurement(
   measurementId: string,
   fixtureId: string | undefined,
   userId: string,
+  shareOnArea = 1,
 ): Promise<{ fixture: Fixture; measurement: Measurement }> {
   return m.sequelize.transaction(async (transaction) => {
     const head = await findMeasurementHead(m, workspaceId, measurementId, transaction);
@@ -48,7 +56,7 @@ export async function applyMeasurement(
     const row = await findFixtureRow(m, workspaceId, target, transaction);
     if (!row) throw new AppError('invalid_input', 'The fixture is not in this workspace.', [{ path: 'fixtureId', message: 'there is no such fixture in this workspace' }]);
 
-    const merged: Record<string, unknown> = { ...unflatten(row), ...measuredFields(readStoredSummary(head.summary)), dataSource: 'measured' };
+    const merged: Record<string, unknown> = { ...unflatten(row), ...measuredFields(readStoredSummary(head.summary), shareOnArea), dataSource: 'measured' };
     const checked = check(fixtureFieldsSchema, merged);
     if (!checked.ok) throw new AppError('invalid_input', 'The fixture would not be valid with these measured figures.', checked.problems);
 

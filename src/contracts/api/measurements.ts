@@ -139,7 +139,18 @@ export const measurementListResponseSchema = z.object({ measurements: z.array(me
  * sets its spectrum summary. Either way the fixture's dataSource becomes `measured` with a link here.
  * Without fixtureId, the fixture the measurement names is used.
  */
-export const applyMeasurementRequestSchema = z.strictObject({ fixtureId: idSchema.optional() });
+export const applyMeasurementRequestSchema = z.strictObject({
+  fixtureId: idSchema.optional(),
+  /**
+   * For a grid: the share of the fixture's photons that landed on the measured area, (0, 1]; 1 when
+   * omitted. The fixture's efficacy becomes the canopy efficacy divided by it.
+   */
+  shareOnArea: z
+    .number({ error: 'must be a number' })
+    .gt(0, { error: 'must be greater than 0' })
+    .lte(1, { error: 'must be at most 1 (all of the light)' })
+    .optional(),
+});
 export type ApplyMeasurementRequest = z.infer<typeof applyMeasurementRequestSchema>;
 
 /** Reply of POST …/measurements/:mid/apply: the fixture as now stored, and the measurement with its links. */

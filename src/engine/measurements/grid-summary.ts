@@ -74,3 +74,15 @@ export function summarisePpfdGrid(grid: PpfdGrid, context: GridContext = {}): Pp
     yM: grid.yM,
   };
 }
+
+/**
+ * A fixture's photon efficacy (µmol/J at the wall) from its efficacy at the canopy (µmol/J, photons
+ * landing on the measured area per wall joule) and the share of its photons that landed there
+ * (a fraction in (0, 1]). A scenario multiplies a fixture's output by its own utilization, so a
+ * figure measured at the canopy is turned back into the fixture's before it is used, or the light
+ * lost to walls and aisles would be counted twice: η = η_canopy / share.
+ */
+export function fixtureEfficacyFromCanopy(efficacyAtCanopy: MicromolePerJoule, shareOnArea: Fraction): MicromolePerJoule {
+  if (!(shareOnArea > 0 && shareOnArea <= 1)) throw new RangeError(`the share of photons on the measured area must be in (0, 1], not ${shareOnArea}`);
+  return as<MicromolePerJoule>(efficacyAtCanopy / shareOnArea);
+}

@@ -7,7 +7,7 @@ export { DEFAULT_MAX_BYTES, utf8ByteLength } from './csv-rows';
 export type { FileChecked, FileProblem } from './file-problems';
 export { parsePpfdGridCsv } from './grid-parse';
 export type { PpfdGrid, ReadOptions } from './grid-parse';
-export { summarisePpfdGrid } from './grid-summary';
+export { fixtureEfficacyFromCanopy, summarisePpfdGrid } from './grid-summary';
 export type { GridContext, PpfdGridSummary } from './grid-summary';
 export { MAX_STEP_NM, REQUIRED_FROM_NM, REQUIRED_TO_NM, SPECTRUM_UNITS, parseSpectrumCsv } from './spectrum-parse';
 export type { Spectrum, SpectrumUnit } from './spectrum-parse';

@@ -4,8 +4,8 @@ import { apiJson } from '../../../lib/api-client';
 import { apiPaths } from '../../../lib/api-paths';
 
 /** POST …/measurements/:mid/apply: sets a library fixture's efficacy (grid) or spectrum summary (spectrum) from the measurement. */
-export function applyMeasurement({ wid, mid, fixtureId }: { wid: string; mid: string; fixtureId: string }) {
-  return apiJson(apiPaths.applyMeasurement(wid, mid), applyMeasurementResponseSchema, { method: 'POST', body: { fixtureId } });
+export function applyMeasurement({ wid, mid, fixtureId, shareOnArea }: { wid: string; mid: string; fixtureId: string; shareOnArea?: number }) {
+  return apiJson(apiPaths.applyMeasurement(wid, mid), applyMeasurementResponseSchema, { method: 'POST', body: { fixtureId, ...(shareOnArea === undefined ? {} : { shareOnArea }) } });
 }
 
 export function useApplyMeasurement() {

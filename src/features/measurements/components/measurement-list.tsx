@@ -51,7 +51,7 @@ export function MeasurementList({ workspaceId }: { workspaceId: string }) {
               <td className="py-1.5 pr-3">{m.fixture?.label ?? <span className="text-ink-soft">—</span>}</td>
               <td className="py-1.5 pr-3">
                 <a className="text-spruce-700 underline underline-offset-2" href={apiPaths.measurementFile(workspaceId, m.id)} download={m.fileName}>{m.fileName}</a>
-                <span className="text-ink-soft"> · {formatNumber(m.byteSize / 1024, 1)} KB</span>
+                <span className="text-ink-soft"> · {formatNumber(m.byteSize / 1000, 1)} kB</span>
               </td>
               <td className="py-1.5 text-ink-soft">{formatDateTime(m.createdAt)} · {m.createdBy.name}</td>
             </tr>
