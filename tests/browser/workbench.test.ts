@@ -193,7 +193,7 @@ describe('the workbench in a browser', { timeout: 120_000 }, () => {
     expect(await shown(owner.page.getByText('"title": "Test room, LED or sodium"'))).toBe(true);
   });
 
-  it('keeps typed input when someone else saved first, and saves it as the next revision on request', async () => {
+  it('keeps typed input when someone else saved first, and saves both editors’ changes merged, with a choice where they clash', async () => {
     const other = await h.session();
     await other.page.goto('/sign-in');
     await other.page.getByLabel('E-mail address').fill(ownerEmail);
@@ -208,13 +208,51 @@ describe('the workbench in a browser', { timeout: 120_000 }, () => {
     await owner.page.getByRole('button', { name: 'Save as revision 4' }).click();
     expect(await shown(owner.page.getByText('Revision 4', { exact: true }))).toBe(true);
 
+    // Different fields: both changes fit together, and the owner's demand charge survives the second save.
     await other.page.getByRole('button', { name: 'Save as revision 4' }).click();
     expect(await shown(other.page.getByText('Someone else saved this scenario while you were editing'))).toBe(true);
     expect(await other.page.getByLabel('Price', { exact: true }).inputValue()).toBe('0.31');
+    const theirs = other.page.getByRole('table', { name: 'What they changed (revision 4)' });
+    expect(await shown(theirs.locator('tr[data-path="electricity.demandChargePerKwMonth"]', { hasText: '2.5' }))).toBe(true);
+    const mine = other.page.getByRole('table', { name: 'What you changed' });
+    expect(await mine.locator('tr[data-path="electricity.pricePerKwh"] td').allInnerTexts()).toEqual(['0.02', '0.31']);
+    expect(await other.page.getByRole('table', { name: 'Fields you both changed' }).count()).toBe(0);
     await other.screenshot('22-editor-conflict');
-    await other.page.getByRole('button', { name: 'Save mine as the next revision' }).click();
+    await other.page.getByRole('button', { name: 'Save the merged version' }).click();
     expect(await shown(other.page.getByText('Revision 5', { exact: true }))).toBe(true);
     expect(await other.page.getByLabel('Price', { exact: true }).inputValue()).toBe('0.31');
+    expect(await other.page.getByRole('textbox', { name: 'Demand charge' }).inputValue()).toBe('2.5');
+    const stored = async () =>
+      other.page.evaluate(async (path) => {
+        const res = await fetch(`/api${path.replace(/^\/w\//, '/workspaces/')}`);
+        const body = (await res.json()) as { scenario: { revision: number; document: { electricity: Record<string, unknown> } } };
+        return { revision: body.scenario.revision, electricity: body.scenario.document.electricity };
+      }, scenarioUrl);
+    expect(await stored()).toEqual({ revision: 5, electricity: { pricePerKwh: '0.31', escalationPctPerYear: 0, demandChargePerKwMonth: '2.5' } });
+
+    // The same field on both sides: nothing is saved until the second editor chooses, here their value.
+    await owner.page.goto(scenarioUrl);
+    await owner.page.getByLabel('Price', { exact: true }).fill('0.25');
+    await owner.page.getByRole('button', { name: 'Save as revision 6' }).click();
+    expect(await shown(owner.page.getByText('Revision 6', { exact: true }))).toBe(true);
+    await other.page.getByLabel('Price', { exact: true }).fill('0.4');
+    await other.page.getByRole('textbox', { name: 'Price rise' }).fill('2');
+    await other.page.getByRole('button', { name: 'Save as revision 6' }).click();
+    const clashes = other.page.getByRole('table', { name: 'Fields you both changed' });
+    expect(await shown(clashes.locator('tr[data-path="electricity.pricePerKwh"]'))).toBe(true);
+    const saveMerged = other.page.getByRole('button', { name: 'Save the merged version' });
+    expect(await saveMerged.isDisabled()).toBe(true);
+    expect(await shown(other.page.getByText('Choose a value for the 1 field you both changed.'))).toBe(true);
+    const takeTheirs = other.page.getByRole('radio', { name: 'Take theirs for electricity.pricePerKwh' });
+    await takeTheirs.focus();
+    await other.page.keyboard.press('Space');
+    expect(await takeTheirs.isChecked()).toBe(true);
+    await other.screenshot('23-editor-conflict-choice');
+    await saveMerged.click();
+    expect(await shown(other.page.getByText('Revision 7', { exact: true }))).toBe(true);
+    expect(await other.page.getByLabel('Price', { exact: true }).inputValue()).toBe('0.25');
+    expect(await other.page.getByRole('textbox', { name: 'Price rise' }).inputValue()).toBe('2');
+    expect(await stored()).toEqual({ revision: 7, electricity: { pricePerKwh: '0.25', escalationPctPerYear: 2, demandChargePerKwMonth: '2.5' } });
     await other.close();
   });
 
