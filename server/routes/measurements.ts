@@ -39,7 +39,9 @@ function receiveFile(): RequestHandler {
       if (typeof e.code === 'string' && e.code.startsWith('LIMIT_')) {
         return next(new AppError('invalid_input', 'The form has more or longer fields than a measurement needs.', [{ path: e.field ?? '(form)', message: 'is too long or one too many' }]));
       }
-      next(error);
+      // The rest come from reading the multipart body itself (cut short, no boundary, malformed
+      // parts): files are held in memory, so no storage fault can reach this point.
+      next(new AppError('invalid_input', 'The form could not be read; send it again as multipart/form-data with the file in the field "file".', [{ path: '(form)', message: 'is not a complete multipart form' }]));
     });
   };
 }
