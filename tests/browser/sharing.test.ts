@@ -5,6 +5,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNTS } from '../../server/db/demo-accounts';
 import { models } from '../../server/db/models';
 import { listCaughtMail } from '../../server/repos/mail';
+import { saveAnalysis } from '../../server/repos/scenario-analysis';
+import type { AnalysisSettings } from '../../src/contracts/api/analysis';
 import { pdfText } from '../support/pdf-text';
 import { SCREENSHOT_DIR, shown, startHarness } from './harness';
 import type { Harness, Session } from './harness';
@@ -17,10 +19,34 @@ let client: Session;
 let link = '';
 const editor = DEMO_ACCOUNTS.find((a) => a.role === 'editor')!;
 
+/** The golden seeded run of the demo's Room A (scenarios/golden): the page must rerun it to the same numbers. */
+const golden = JSON.parse(readFileSync('scenarios/golden/room-a-relamp-or-replace.uncertainty.json', 'utf8')) as {
+  settings: { seed: number; draws: number; inputs: Array<{ path: string; low: number; likely: number; high: number }> };
+  summary: { options: Array<{ id: string; chanceCheapest: number; p10: number; p50: number; p90: number }> };
+};
+
 beforeAll(async () => {
   h = await startHarness();
   consultant = await h.session();
   client = await h.session();
+  // The consultant kept the golden uncertainty settings with Room A before publishing.
+  const [[room], [user]] = await Promise.all([
+    h.running.sequelize.query("SELECT id FROM scenarios WHERE title LIKE '%Room A%'").then(([r]) => r as Array<{ id: string }>),
+    h.running.sequelize.query('SELECT id FROM users WHERE email = ?', { replacements: [editor.email] }).then(([r]) => r as Array<{ id: string }>),
+  ]);
+  const text = (v: number) => String(v);
+  const kept: AnalysisSettings = {
+    version: 1,
+    sweep: { vary: 'led-bar-650', tariffLo: '0', tariffHi: '0.7', tariffN: '100', factorLo: '0.5', factorHi: '2', factorN: '100', showValueOf: 'led-bar-650' },
+    swings: { pct: '20', measure: 'option', a: 'owned-hps-600', b: 'led-bar-650' },
+    breakeven: { a: 'owned-hps-600', b: 'led-bar-650' },
+    uncertainty: {
+      seed: text(golden.settings.seed),
+      draws: text(golden.settings.draws),
+      inputs: golden.settings.inputs.map((r) => ({ path: r.path, low: text(r.low), likely: text(r.likely), high: text(r.high) })),
+    },
+  };
+  await saveAnalysis(models(h.running.sequelize), room!.id, kept, user!.id);
 });
 afterAll(async () => {
   await h?.close();
@@ -79,6 +105,19 @@ describe('sharing a snapshot in a browser', () => {
     expect(await shown(p.getByRole('complementary', { name: 'Safety notes' }))).toBe(true);
     expect(await p.getByText('Signed in as').count()).toBe(0);
     await client.screenshot('41-shared-snapshot');
+  }, 90_000);
+
+  it('shows the uncertainty settings kept with the snapshot, and rerunning them in the browser gives the golden numbers exactly', async () => {
+    const p = client.page;
+    const section = p.getByTestId('snapshot-uncertainty');
+    expect(await shown(section)).toBe(true);
+    expect(await section.innerText()).toContain(String(golden.settings.seed));
+    await section.getByRole('button', { name: 'Run these draws here' }).click();
+    const rows = section.locator('tr[data-exact]');
+    await rows.first().waitFor({ timeout: 60_000 });
+    const got = await rows.evaluateAll((trs) => trs.map((tr) => ({ id: tr.getAttribute('data-option'), ...JSON.parse(tr.getAttribute('data-exact') ?? '{}') })));
+    expect(got).toEqual(golden.summary.options.map((o) => ({ id: o.id, chanceCheapest: o.chanceCheapest, p10: o.p10, p50: o.p50, p90: o.p90 })));
+    await section.screenshot({ path: `${SCREENSHOT_DIR}/41b-shared-snapshot-uncertainty.png` });
   }, 90_000);
 
   it('builds the PDF report in the browser when asked, and its text holds the title', async () => {

@@ -7,13 +7,10 @@ import {
 import type { SwingMeasure } from '../../../contracts/sensitivity';
 import { checkSweepSettings, checkUncertaintySettings } from '../../../engine/sensitivity/checks';
 import { checkSwingSettings } from '../../../engine/sensitivity/swings';
+import { toNumber, uncertaintyFromDraft } from '../../../lib/uncertainty-draft';
 import type { BreakevenDraft, SweepDraft, SwingsDraft, UncertaintyDraft } from './analysis-settings';
 
-/** Text as typed → number: empty is "not given", a comma works as a decimal point, anything else is NaN. */
-export function toNumber(t: string): number | undefined {
-  const v = t.trim().replace(',', '.');
-  return v === '' ? undefined : Number(v);
-}
+export { toNumber, uncertaintyFromDraft };
 
 /** The sweep settings a draft describes (unchecked). */
 export function sweepFromDraft(d: SweepDraft) {
@@ -35,14 +32,6 @@ export function swingsFromDraft(d: SwingsDraft) {
 
 export function breakevenFromDraft(d: BreakevenDraft) {
   return { a: d.a, b: d.b };
-}
-
-export function uncertaintyFromDraft(d: UncertaintyDraft) {
-  return {
-    seed: toNumber(d.seed),
-    draws: toNumber(d.draws),
-    inputs: d.inputs.map((r) => ({ path: r.path, low: toNumber(r.low), likely: toNumber(r.likely), high: toNumber(r.high) })),
-  };
 }
 
 /** Field path → first problem there; a form shows each beside its field. */

@@ -15,6 +15,7 @@ import { ForkPanel } from './fork-panel';
 import { ReproduceNotice } from './reproduce-notice';
 import { SnapshotDownloads } from './snapshot-downloads';
 import { SnapshotInputs } from './snapshot-inputs';
+import { SnapshotUncertainty } from './snapshot-uncertainty';
 
 /**
  * The read-only page of a shared snapshot. The figures shown are the published ones; the page
@@ -58,6 +59,11 @@ export function SnapshotPage({ data }: { data: SnapshotResponse }) {
       <Panel title="What the figures assume">
         <SnapshotInputs scenario={s.scenario} fixtures={s.fixtures} />
       </Panel>
+      {s.analysis ? (
+        <Panel title="Uncertainty run kept with it">
+          <SnapshotUncertainty scenario={s.scenario} settings={s.analysis.uncertainty} />
+        </Panel>
+      ) : null}
       <Panel title="Measurements">
         {lines.length ? (
           <ul className="list-disc pl-5 text-sm">
