@@ -47,7 +47,8 @@ export function fixturesRouter({ m, sequelize }: ApiDeps): Router {
     const patch = parseBody(updateFixtureRequestSchema, req);
     res.json({ fixture: await updateFixture(m, accessOf(req).workspace.id, idParam(req, 'fid'), patch, requireCaller(req).user.id) });
   });
-  router.delete('/:fid', editors, async (req, res) => {
+  // Deleting is the owners' (issue: "owners manage members, invitations and deletion").
+  router.delete('/:fid', workspaceRole(sequelize, 'owner'), async (req, res) => {
     const row = await findFixtureRow(m, accessOf(req).workspace.id, idParam(req, 'fid'));
     if (!row) throw new AppError('not_found', 'There is no such fixture in this workspace.');
     await deleteFixtureRow(m, row.id);

@@ -55,7 +55,8 @@ export function scenariosRouter({ m, sequelize }: ApiDeps): Router {
     const record = await updateScenario(m, wid(req), idParam(req, 'sid'), ifMatch, input.document, userId(req));
     res.set('ETag', `"${record.revision}"`).json({ scenario: record });
   });
-  router.delete('/:sid', editors, async (req, res) => {
+  // Deleting is the owners' (issue: "owners manage members, invitations and deletion").
+  router.delete('/:sid', workspaceRole(sequelize, 'owner'), async (req, res) => {
     await softDeleteScenario(m, (await existing(req)).id);
     res.status(204).end();
   });

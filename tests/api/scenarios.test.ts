@@ -110,9 +110,11 @@ describe('scenarios', () => {
     expect(none.total).toBe(0);
   });
 
-  it('hides a deleted scenario but keeps its history rows', async () => {
+  it('lets only an owner delete a scenario, which then is hidden while its history rows stay', async () => {
     const created = (await editor.post(base(), { document: sampleScenario('To delete') })).body.scenario;
-    expect((await editor.delete(`${base()}/${created.id}`)).status).toBe(204);
+    expect((await editor.delete(`${base()}/${created.id}`)).status).toBe(403);
+    const owner = await app.signInAs('owner');
+    expect((await owner.delete(`${base()}/${created.id}`)).status).toBe(204);
     expect((await editor.get(`${base()}/${created.id}`)).status).toBe(404);
     expect(await app.m.Revision.count({ where: { scenarioId: created.id } })).toBe(1);
   });

@@ -68,7 +68,8 @@ describe('publishing a snapshot', () => {
     expect(measurements[0]).toMatchObject({ kind: 'PPFD grid', name: 'Bench at 40 cm', optionId });
     expect(measurements[0]!.figures['mean PPFD (µmol/m²/s)']).toBeCloseTo(600, 9);
     expect(measurements[0]!.figures['min/max']).toBeCloseTo(0.5, 9);
-    expect((await d.editor.delete(`/api/workspaces/${d.wid}/measurements/${uploaded.body.measurement.id}`)).status).toBe(204);
+    const owner = await app.signInAs('owner');
+    expect((await owner.delete(`/api/workspaces/${d.wid}/measurements/${uploaded.body.measurement.id}`)).status).toBe(204);
     expect(await read()).toEqual(measurements);
   });
 });

@@ -65,7 +65,7 @@ export function MeasurementDetail({ scope, measurementId }: { scope: WorkspaceSc
           <UseForFixture workspaceId={wid} measurement={m} />
         </Panel>
       ) : null}
-      {scope.canEdit ? (
+      {scope.canManage ? (
         <div>
           <Button tone="danger" busy={remove.isPending} onClick={erase}>Delete this measurement</Button>
           {remove.isError ? <Notice tone="error" className="mt-2">{errorMessage(remove.error)}</Notice> : null}

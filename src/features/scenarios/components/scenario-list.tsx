@@ -79,7 +79,7 @@ export function ScenarioList({ scope, q, page, onQuery, newButton }: {
                     {scope.canEdit ? (
                       <>
                         <Button size="sm" tone="quiet" busy={duplicate.isPending && duplicate.variables.sid === s.id} onClick={() => duplicate.mutate({ wid: scope.workspaceId, sid: s.id })}>Duplicate</Button>
-                        {confirming === s.id ? (
+                        {!scope.canManage ? null : confirming === s.id ? (
                           <Button size="sm" tone="danger" onClick={() => remove.mutate({ wid: scope.workspaceId, sid: s.id }, { onSettled: () => setConfirming(null) })}>Delete for good</Button>
                         ) : (
                           <Button size="sm" tone="quiet" onClick={() => setConfirming(s.id)}>Delete</Button>
