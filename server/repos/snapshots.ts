@@ -29,14 +29,33 @@ export async function findLinkRow(m: Models, snapshotId: string): Promise<Snapsh
 }
 
 /** The link found by the SHA-256 of its id: one indexed read, whether or not the id exists. */
-export async function findLinkByHash(m: Models, idHash: string): Promise<Pick<SnapshotLinkRow, 'snapshotId' | 'expiresAt' | 'revokedAt'> | null> {
-  const r = await readRow<{ snapshot_id: string; expires_at: string | null; revoked_at: string | null }>(
+export async function findLinkByHash(m: Models, idHash: string): Promise<StoredLink | null> {
+  // One statement for both tables, so a known, a withdrawn and an unknown id cost the same round trip.
+  const r = await readRow<{ snapshot_id: string | null; expires_at: string | null; revoked_at: string | Date | null; id_hash: string }>(
     m.sequelize,
-    'SELECT snapshot_id, expires_at, revoked_at FROM snapshot_links WHERE id_hash = ?',
-    [idHash],
+    'SELECT snapshot_id, expires_at, revoked_at, id_hash FROM snapshot_links WHERE id_hash = ? ' +
+      'UNION ALL SELECT NULL, NULL, withdrawn_at, id_hash FROM withdrawn_links WHERE id_hash = ?',
+    [idHash, idHash],
   );
   if (!r) return null;
-  return { snapshotId: r.snapshot_id, expiresAt: r.expires_at ? new Date(r.expires_at) : null, revokedAt: r.revoked_at ? new Date(r.revoked_at) : null };
+  return { idHash: r.id_hash, snapshotId: r.snapshot_id, expiresAt: r.expires_at ? new Date(r.expires_at) : null, revokedAt: r.revoked_at ? new Date(r.revoked_at) : null };
+}
+
+/**
+ * A link as the public read finds it by the SHA-256 of its id: `snapshotId` is null when the
+ * snapshot went with its deleted workspace, and then `revokedAt` is when that happened.
+ */
+export interface StoredLink extends Pick<SnapshotLinkRow, 'expiresAt' | 'revokedAt'> {
+  idHash: string;
+  snapshotId: string | null;
+}
+
+/** Keeps the id hashes of a workspace's links before the workspace (and its snapshots) is deleted. */
+export async function withdrawWorkspaceLinks(m: Models, workspaceId: string, transaction: Transaction): Promise<void> {
+  await m.sequelize.query(
+    'INSERT INTO withdrawn_links (id_hash, withdrawn_at) SELECT l.id_hash, ? FROM snapshot_links l JOIN snapshots s ON s.id = l.snapshot_id WHERE s.workspace_id = ?',
+    { replacements: [new Date(), workspaceId], transaction },
+  );
 }
 
 /** A workspace's snapshots with their links, newest first; only one scenario's when `scenarioId` is given. */

@@ -151,6 +151,29 @@ describe('links', () => {
     expect((await app.client().get(`/api/snapshots/${snap.id}/report.pdf`)).status).toBe(410);
   });
 
+  it('answers 410 (withdrawn), not 404, for every link of a workspace its owner deleted, and keeps nothing of the content', async () => {
+    const owner = await app.signInAs('owner');
+    const wid = (await owner.post('/api/workspaces', { name: 'Short-lived room', currency: 'EUR' })).body.workspace.id as string;
+    const document = (await d.editor.get(`/api/workspaces/${d.wid}/scenarios/${d.sid}`)).body.scenario.document;
+    const sid = (await owner.post(`/api/workspaces/${wid}/scenarios`, { document })).body.scenario.id as string;
+    const [live, revoked] = [await publish(owner, wid, sid), await publish(owner, wid, sid)];
+    await owner.post(`/api/workspaces/${wid}/snapshots/${revoked.id}/revoke`);
+    expect((await app.client().get(`/api/snapshots/${live.id}`)).status).toBe(200);
+    expect((await owner.delete(`/api/workspaces/${wid}`)).status).toBe(204);
+    for (const id of [live.id, revoked.id]) {
+      const data = await app.client().get(`/api/snapshots/${id}`);
+      expect(data.status).toBe(410);
+      expect(data.body.error).toMatchObject({ code: 'gone', fields: [{ path: 'link', message: 'revoked' }] });
+      const page = await fetch(`${app.base}/s/${id}`);
+      expect(page.status).toBe(410);
+      expect(await page.text()).toContain('withdrawn');
+    }
+    expect(await rawRow(live.id)).toBeUndefined();
+    const kept = await app.running.sequelize.query<Record<string, unknown>>('SELECT * FROM withdrawn_links', { type: QueryTypes.SELECT });
+    expect(kept.length).toBeGreaterThanOrEqual(2);
+    expect(Object.keys(kept[0]!).sort()).toEqual(['id_hash', 'withdrawn_at']);
+  });
+
   it('answers 410 once the expiry set by an editor has passed', async () => {
     const snap = await publish(d.editor, d.wid, d.sid, { expiresAt: new Date(Date.now() + 60_000).toISOString() });
     expect((await app.client().get(`/api/snapshots/${snap.id}`)).status).toBe(200);

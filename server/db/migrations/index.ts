@@ -8,6 +8,7 @@ import * as m0005 from './0005-measurements';
 import * as m0006 from './0006-snapshots';
 import * as m0007 from './0007-scenario-analysis';
 import * as m0008 from './0008-snapshot-analysis';
+import * as m0009 from './0009-withdrawn-links';
 
 /** One migration: a stable name and its up and down steps. */
 export interface Migration {
@@ -26,4 +27,5 @@ export const migrations: Migration[] = [
   { name: '0006-snapshots', ...m0006 },
   { name: '0007-scenario-analysis', ...m0007 },
   { name: '0008-snapshot-analysis', ...m0008 },
+  { name: '0009-withdrawn-links', ...m0009 },
 ];

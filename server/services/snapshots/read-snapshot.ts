@@ -12,7 +12,7 @@ const CACHE_BYTES = 32 * 1024 * 1024;
 const NO_MATCH = Buffer.alloc(32);
 
 /** What a share id leads to: nothing, or a snapshot with its link's current state. */
-export type LinkLookup = { found: false } | { found: true; snapshotId: string; link: SnapshotLink };
+export type LinkLookup = { found: false } | { found: true; snapshotId: string | null; link: SnapshotLink };
 
 /**
  * Public reads of snapshots by share id. Every lookup does the same work whether the id exists or
@@ -51,9 +51,11 @@ export class SnapshotReader {
 
   private async read(wanted: string): Promise<LinkLookup> {
     const row = await findLinkByHash(this.m, wanted);
-    const stored = row ? Buffer.from(hashSnapshotId(row.snapshotId), 'hex') : NO_MATCH;
-    const same = timingSafeEqual(stored, Buffer.from(wanted, 'hex'));
+    const stored = row ? Buffer.from(row.idHash, 'hex') : NO_MATCH;
+    const same = stored.length === NO_MATCH.length && timingSafeEqual(stored, Buffer.from(wanted, 'hex'));
     if (!row || !same) return { found: false };
+    // A link whose snapshot went with its workspace reads as revoked: withdrawn by its publishers.
+    if (row.snapshotId === null) return { found: true, snapshotId: null, link: linkView({ expiresAt: null, revokedAt: row.revokedAt ?? new Date(0) }) };
     return { found: true, snapshotId: row.snapshotId, link: linkView(row) };
   }
 
@@ -61,7 +63,7 @@ export class SnapshotReader {
   async open(id: string): Promise<{ link: SnapshotLink; snapshotBytes: Buffer }> {
     const found = await this.lookup(id);
     if (!found.found) throw new AppError('not_found', 'There is no shared snapshot at this link.');
-    if (found.link.status !== 'live') throw goneError(found.link);
+    if (found.link.status !== 'live' || found.snapshotId === null) throw goneError(found.link);
     return { link: found.link, snapshotBytes: await this.snapshotBytes(found.snapshotId) };
   }
 
