@@ -129,12 +129,39 @@ describe('spectrum yield photon flux and red:far-red', () => {
 // the spectra are synthesised, so these check plausibility, not any real lamp.
 describe('spectrum sanity bounds on synthesised lamp-like spectra (common practice)', () => {
   const nm = wavelengths(360, 830, 1);
-  it('finds little blue (under 8 % of PAR photons) and a CCT near 2000 K in a sodium-like spectrum', () => {
-    const sodium = read(spectrumCsv(nm, (at) => line(at, 589, 40) + 0.6 * line(at, 569, 12) + 0.5 * line(at, 616, 15) + 0.08 * line(at, 498, 6) + 0.04 * line(at, 467, 6) + 0.25 * line(at, 819, 10)));
-    expect(sodium.sharesPct.blue).toBeLessThan(8);
-    expect(sodium.cctK).not.toBeNull();
-    expect(sodium.cctK!).toBeGreaterThan(1700);
-    expect(sodium.cctK!).toBeLessThan(2400);
+  // Line positions are the lamps' usual emitters (sodium 589 nm, mercury 405/436/546/578 nm, indium
+  // 451 nm, thallium 535 nm), recalled from memory; widths and strengths are shaped by hand to look
+  // like each kind, and the bounds are the trade's rough figures quoted in issue 5.
+  const hg = (at: number) => 0.5 * line(at, 405, 3) + 0.9 * line(at, 436, 3) + 1.0 * line(at, 546, 3) + 0.6 * line(at, 578, 4);
+  const sodium = read(spectrumCsv(nm, (at) => line(at, 589, 40) + 0.6 * line(at, 569, 12) + 0.5 * line(at, 616, 15) + 0.1 * line(at, 498, 6) + 0.1 * line(at, 467, 6) + 0.06 * line(at, 450, 30) + 0.25 * line(at, 819, 10)));
+  const metalHalide = read(spectrumCsv(nm, (at) => line(at, 575, 200) + 0.8 * hg(at) + 4 * line(at, 451, 6) + 0.5 * line(at, 535, 4) + 1.5 * line(at, 589, 10) + 0.8 * line(at, 660, 20) + 0.1 * line(at, 750, 60)));
+  const ceramic = read(spectrumCsv(nm, (at) => line(at, 605, 240) + 0.3 * hg(at) + 0.15 * line(at, 451, 20) + 0.4 * line(at, 589, 14) + 0.3 * line(at, 670, 12) + 0.1 * line(at, 750, 60)));
+
+  it('finds about 3–5 % blue and a CCT near 2000 K in a sodium-like spectrum', () => {
+    expect(sodium.sharesPct.blue).toBeGreaterThan(2.5);
+    expect(sodium.sharesPct.blue).toBeLessThan(6);
+    expect(sodium.cctK!).toBeGreaterThan(1800);
+    expect(sodium.cctK!).toBeLessThan(2300);
+  });
+
+  it('finds roughly a fifth to a quarter blue and a CCT near 4000 K in a metal-halide-like spectrum', () => {
+    expect(metalHalide.sharesPct.blue).toBeGreaterThan(18);
+    expect(metalHalide.sharesPct.blue).toBeLessThan(27);
+    expect(metalHalide.cctK!).toBeGreaterThan(3700);
+    expect(metalHalide.cctK!).toBeLessThan(4700);
+  });
+
+  it('finds near 15 % blue and a CCT of 3000–3500 K in a ceramic-metal-halide-like spectrum', () => {
+    expect(ceramic.sharesPct.blue).toBeGreaterThan(11);
+    expect(ceramic.sharesPct.blue).toBeLessThan(19);
+    expect(ceramic.cctK!).toBeGreaterThan(3000);
+    expect(ceramic.cctK!).toBeLessThan(3600);
+  });
+
+  it('ranks the three discharge kinds by blue as the trade does: metal halide, then ceramic metal halide, then sodium', () => {
+    expect(metalHalide.sharesPct.blue).toBeGreaterThan(ceramic.sharesPct.blue);
+    expect(ceramic.sharesPct.blue).toBeGreaterThan(sodium.sharesPct.blue);
+    for (const s of [sodium, metalHalide, ceramic]) expect(sumOfShares(s)).toBeCloseTo(100, 9);
   });
 
   it('finds more blue as a Planckian radiator gets hotter: 2000 K < 3000 K < 4000 K < 6500 K', () => {
