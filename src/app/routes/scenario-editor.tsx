@@ -24,6 +24,7 @@ export default function ScenarioEditorPage() {
         key: fields.key,
         label: fields.label,
         dataSource: fields.dataSource,
+        measurementId: fields.measurementId ?? null,
         option: optionFromFixture(fields),
       })),
     [fixtures.data],

@@ -6,6 +6,8 @@ export interface LibraryEntry {
   key: string;
   label: string;
   dataSource: 'datasheet' | 'measured' | 'estimate';
+  /** The measurement its figures came from, while that measurement is kept. */
+  measurementId?: string | null;
   option: OptionInput;
 }
 

@@ -1,4 +1,6 @@
 import { useRef } from 'react';
+import { Link } from 'react-router-dom';
+import { paths } from '../../../../app/paths';
 import { useFormContext, useWatch } from 'react-hook-form';
 import type { OptionInput, ScenarioInput } from '../../../../contracts/scenario';
 import { Badge } from '../../../../components/ui/badge';
@@ -11,6 +13,7 @@ import type { EntrySwitch, OutputMode } from '../../../../engine/entry-conversio
 import { MoneyField, NumberField, SelectField, TextField } from './form-kit';
 import type { LibraryEntry } from './library-entry';
 import { overriddenFields } from './library-entry';
+import { useWorkspace } from '../../../../lib/workspace-context';
 
 const TECH_OPTIONS = Object.entries(TECHNOLOGY_SHORT).map(([value, label]) => ({ value, label: label === 'Fluor.' ? 'Fluorescent' : label }));
 
@@ -23,6 +26,7 @@ export function OptionCard({ index, currency, canEdit, canRemove, onRemove, entr
   onRemove: () => void;
   entry: LibraryEntry | undefined;
 }) {
+  const { workspaceId } = useWorkspace();
   const { setValue, getValues } = useFormContext<ScenarioInput>();
   const base = `options.${index}` as const;
   const option = useWatch<ScenarioInput, `options.${number}`>({ name: base }) as OptionInput | undefined;
@@ -52,6 +56,9 @@ export function OptionCard({ index, currency, canEdit, canRemove, onRemove, entr
       <div className="mb-2 flex flex-wrap items-center gap-2">
         <h3 className="font-semibold">Option {index + 1}</h3>
         {entry ? <Badge tone="spruce" title={`From the library, figures from a ${entry.dataSource}`}>from library · {entry.dataSource}</Badge> : null}
+        {entry?.measurementId ? (
+          <Link className="text-sm text-spruce-700 underline" to={paths.measurement.to(workspaceId, entry.measurementId)}>the measurement and its file</Link>
+        ) : null}
         {overrides.length > 0 ? <Badge tone="gold" title="These figures differ from the library entry in this scenario only">changed here: {overrides.join(', ')}</Badge> : null}
         {canEdit && canRemove ? <Button size="sm" tone="quiet" className="ml-auto" onClick={onRemove}>Remove option</Button> : null}
       </div>
