@@ -66,6 +66,8 @@ export async function checkDatabaseFile(path: string): Promise<DatabaseCheck> {
     const known = new Set(migrations.map((m) => m.name));
     const unknown = names.filter((n) => !known.has(n));
     if (unknown.length) problems.push(`made by a newer version of Photon Parity (unknown migrations: ${unknown.join(', ')})`);
+    // An empty schema would pass the other checks and replace every row with nothing.
+    if (names.length === 0) problems.push('not a Photon Parity database: no migration has been applied to it');
   } catch (error) {
     problems.push(`not a Photon Parity database: ${(error as Error).message}`);
   } finally {

@@ -86,7 +86,16 @@ describe('measurements in a browser', () => {
     const select = p.getByLabel('Library fixture');
     const first = await select.locator('option').nth(1).textContent();
     await select.selectOption({ index: 1 });
-    expect(await shown(p.getByText(/Canopy efficacy includes what is lost to walls/))).toBe(true);
+    await p.getByLabel("Share of the fixture's photons that landed on the measured area").fill('0.9');
+    const explained = p.getByText(/Scenarios then apply their own utilization/);
+    expect(await shown(explained)).toBe(true);
+    // The fixture's efficacy is the canopy efficacy over the share: both are shown, to 2 decimals.
+    const [atCanopy, forFixture] = [...((await explained.textContent()) ?? '').matchAll(/([\d.]+) µmol\/J/g)].map((m) => Number(m[1]));
+    expect(forFixture!).toBeCloseTo(atCanopy! / 0.9, 1);
+    await p.getByLabel("Share of the fixture's photons that landed on the measured area").fill('1.5');
+    expect(await shown(p.getByText('must be a number greater than 0 and at most 1'))).toBe(true);
+    expect(await p.getByRole('button', { name: /Set the fixture’s efficacy/ }).isDisabled()).toBe(true);
+    await p.getByLabel("Share of the fixture's photons that landed on the measured area").fill('0.9');
     await p.getByRole('button', { name: /Set the fixture’s efficacy/ }).click();
     expect(await shown(p.getByText(`${first} now carries measured figures from this file.`))).toBe(true);
     await s.screenshot('63-grid-used-for-fixture');

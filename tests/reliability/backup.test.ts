@@ -164,19 +164,28 @@ describe('npm run db:restore', () => {
     for (const table of ['scenarios', 'scenario_revisions', 'measurements', 'snapshots', 'snapshot_links']) expect(after[table], table).toEqual(backupDigests[table]);
   });
 
-  it('refuses a file that is not a database, and a database from a newer version, exit 1 with the reason, leaving the target as it was', { timeout: 60_000 }, async () => {
+  it('refuses a file that is not a database, a database from a newer version and one with no migration applied, exit 1 with the reason, leaving the target as it was', { timeout: 60_000 }, async () => {
     const target = fileSha256(restoredPath);
     const junk = join(dir, 'junk.sqlite');
     writeFileSync(junk, 'this is not a database');
     const newer = join(dir, 'newer.sqlite');
     copyFileSync(backupPath, newer);
     await runOnFile(newer, "INSERT INTO SequelizeMeta (name) VALUES ('9999-from-a-later-version')");
-    const [notDb, fromLater] = await Promise.all([runDbScript('db:restore', junk, restoredPath), runDbScript('db:restore', newer, restoredPath)]);
+    const empty = join(dir, 'empty.sqlite');
+    copyFileSync(backupPath, empty);
+    await runOnFile(empty, 'DELETE FROM SequelizeMeta');
+    const [notDb, fromLater, noSchema] = await Promise.all([
+      runDbScript('db:restore', junk, restoredPath),
+      runDbScript('db:restore', newer, restoredPath),
+      runDbScript('db:restore', empty, restoredPath),
+    ]);
     expect(notDb.code).toBe(1);
     expect(notDb.stderr).toBe(`restore failed: ${junk} was not restored: not a Photon Parity database: SQLITE_NOTADB: file is not a database\n`);
     expect(fromLater.code).toBe(1);
     expect(fromLater.stderr).toBe(`restore failed: ${newer} was not restored: made by a newer version of Photon Parity (unknown migrations: 9999-from-a-later-version)\n`);
-    expect(notDb.stdout + fromLater.stdout).toBe('');
+    expect(noSchema.code).toBe(1);
+    expect(noSchema.stderr).toBe(`restore failed: ${empty} was not restored: not a Photon Parity database: no migration has been applied to it\n`);
+    expect(notDb.stdout + fromLater.stdout + noSchema.stdout).toBe('');
     expect(fileSha256(restoredPath)).toBe(target);
   });
 });
