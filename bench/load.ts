@@ -7,6 +7,7 @@ import { ApiClient } from '../tests/helpers/api-client';
 import { sampleScenario } from '../tests/helpers/seed';
 import { startBenchServer } from './sharing-server';
 import type { BenchRow, BenchSuite } from './types';
+import { buildClientIfNeeded } from '../server/build-client';
 
 interface CannonRequest {
   method: 'GET' | 'POST';
@@ -22,6 +23,8 @@ interface CannonResult {
   '2xx': number;
   '4xx': number;
   '5xx': number;
+  /** Responses outside 200–299, counted by autocannon. */
+  non2xx: number;
 }
 type Autocannon = (o: { url: string; connections: number; duration: number; timeout: number; requests: CannonRequest[] }) => Promise<CannonResult>;
 const autocannon = createRequire(import.meta.url)('autocannon') as Autocannon;
@@ -50,7 +53,15 @@ async function prepare(base: string): Promise<Route[]> {
   const write = { ...session, 'x-csrf-token': c.csrfToken ?? '', 'content-type': 'application/json' };
   return [
     { name: 'GET …/scenarios/:sid/result', connections: 100, requests: ids.map((id) => ({ method: 'GET', path: `${path}/${id}/result`, headers: session })) },
-    { name: 'GET /api/snapshots/:id (public)', connections: 50, requests: [{ method: 'GET', path: `/api/snapshots/${snap.body.snapshot.id as string}` }] },
+    {
+      // What a reader's browser asks for: the page, then its data (the page's scripts are static files).
+      name: 'GET /s/:id and /api/snapshots/:id (public)',
+      connections: 50,
+      requests: [
+        { method: 'GET', path: `/s/${snap.body.snapshot.id as string}` },
+        { method: 'GET', path: `/api/snapshots/${snap.body.snapshot.id as string}` },
+      ],
+    },
     {
       name: 'POST …/scenarios (save)',
       connections: 50,
@@ -67,6 +78,8 @@ async function prepare(base: string): Promise<Route[]> {
 export const loadSuite: BenchSuite = {
   name: 'load',
   async run() {
+    // The /s/:id page is the built client's index.html.
+    await buildClientIfNeeded(process.cwd());
     const dir = mkdtempSync(join(tmpdir(), 'pp-bench-load-'));
     const server = await startBenchServer(join(dir, 'load.sqlite'));
     try {
@@ -84,6 +97,8 @@ export const loadSuite: BenchSuite = {
       });
       rows.push({ name: `errors and timeouts, all routes (${total} connections, ${SECONDS} s)`, value: results.reduce((n, r) => n + r.errors, 0), unit: 'count', target: 1, direction: 'below' });
       rows.push({ name: 'responses of 500 or above, all routes', value: results.reduce((n, r) => n + r['5xx'], 0), unit: 'count', target: 1, direction: 'below' });
+      // Every request here is valid, so anything but a 2xx (a 4xx included) is a failure too.
+      rows.push({ name: 'responses other than 2xx, all routes', value: results.reduce((n, r) => n + r.non2xx, 0), unit: 'count', target: 1, direction: 'below' });
       rows.push({ name: 'machine load average (1 min) before / after', value: loadavg()[0]!, unit: '', note: `before ${before.toFixed(1)}` });
       return rows;
     } finally {
