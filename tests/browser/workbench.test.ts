@@ -20,11 +20,12 @@ afterAll(async () => {
   await h?.close();
 });
 
-async function signUp(s: Session, name: string, email: string, next?: string) {
+async function signUp(s: Session, name: string, email: string, next?: string, shot?: string) {
   await s.page.goto(next ? `/sign-up?next=${encodeURIComponent(next)}` : '/sign-up');
   await s.page.getByLabel('Your name').fill(name);
   await s.page.getByLabel('E-mail address').fill(email);
   await s.page.getByLabel('Password').fill(password);
+  if (shot) await s.screenshot(shot);
   await s.page.getByRole('button', { name: 'Create the account' }).click();
 }
 
@@ -270,7 +271,9 @@ describe('the workbench in a browser', { timeout: 120_000 }, () => {
     expect(link).toBeDefined();
 
     const viewer = await h.session({ width: 1024, height: 768 });
-    await signUp(viewer, 'Vera Viewer', viewerEmail, link);
+    await signUp(viewer, 'Vera Viewer', viewerEmail, link, '24-sign-up');
+    await viewer.page.getByRole('button', { name: 'Accept and open the workspace' }).waitFor();
+    await viewer.screenshot('25-invitation-accept');
     await viewer.page.getByRole('button', { name: 'Accept and open the workspace' }).click();
     await viewer.page.getByRole('link', { name: 'Test room, LED or sodium' }).click();
     await viewer.page.getByRole('table', { name: /leveled options/i }).waitFor();
