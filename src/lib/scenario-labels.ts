@@ -56,3 +56,17 @@ export function inputLabel(s: Scenario, path: string): string {
   }
   return path;
 }
+
+/**
+ * A changed field in plain words, for paths that name options by id (`options[led-720].wallWatts`
+ * → "LED bar: wall watts") as well as scenario fields; unknown paths come back as they are.
+ */
+export function changedFieldLabel(doc: { options?: ReadonlyArray<{ id?: string; label?: string } | undefined> } | undefined, where: string): string {
+  const known = SCENARIO_WORDS[where];
+  if (known) return known;
+  const option = /^options\[([^\]]+)\]\.(.+)$/.exec(where);
+  if (!option) return where;
+  const id = option[1]!;
+  const label = doc?.options?.find((o) => o?.id === id)?.label?.split(',')[0]?.trim();
+  return `${label || id}: ${FIELD_WORDS[option[2]!] ?? option[2]}`;
+}

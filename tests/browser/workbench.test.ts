@@ -244,7 +244,7 @@ describe('the workbench in a browser', { timeout: 120_000 }, () => {
     const saveMerged = other.page.getByRole('button', { name: 'Save the merged version' });
     expect(await saveMerged.isDisabled()).toBe(true);
     expect(await shown(other.page.getByText('Choose a value for the 1 field you both changed.'))).toBe(true);
-    const takeTheirs = other.page.getByRole('radio', { name: 'Take theirs for electricity.pricePerKwh' });
+    const takeTheirs = other.page.getByRole('radio', { name: 'Take theirs for Electricity price, year 1' });
     await takeTheirs.focus();
     await other.page.keyboard.press('Space');
     expect(await takeTheirs.isChecked()).toBe(true);

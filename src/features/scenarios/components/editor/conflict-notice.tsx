@@ -71,10 +71,10 @@ export function ConflictNotice({ message, base, theirs, wid, sid, onLoadLatest, 
       ) : null}
       {theirs && merge ? (
         <div className="mt-3 space-y-3">
-          <ChangeList title={`What they changed (revision ${theirs.revision})`} changes={sideChanges(base, theirs.document)} empty="nothing." />
-          <ChangeList title="What you changed" changes={mine.success ? sideChanges(base, mine.data) : []} empty="nothing." />
+          <ChangeList title={`What they changed (revision ${theirs.revision})`} changes={sideChanges(base, theirs.document)} empty="nothing." doc={theirs.document} />
+          <ChangeList title="What you changed" changes={mine.success ? sideChanges(base, mine.data) : []} empty="nothing." doc={mine.success ? mine.data : base} />
           {merge.clashes.length > 0 ? (
-            <ClashTable clashes={merge.clashes} choices={choices} onChoose={(where, side) => setChoices((c) => ({ ...c, [where]: side }))} theirRevision={theirs.revision} />
+            <ClashTable clashes={merge.clashes} choices={choices} onChoose={(where, side) => setChoices((c) => ({ ...c, [where]: side }))} theirRevision={theirs.revision} doc={theirs.document} />
           ) : (
             <p className="text-sm">None of the fields you changed were changed by them too, so both sets of changes fit together.</p>
           )}

@@ -1,3 +1,4 @@
+import { changedFieldLabel } from '../../../../lib/scenario-labels';
 import { displayValue } from '../../lib/document-paths';
 import type { Clash, Side } from '../../merge/three-way-merge';
 import type { SideChange } from '../../merge/side-changes';
@@ -5,8 +6,21 @@ import type { SideChange } from '../../merge/side-changes';
 const SHOWN = 40;
 const cell = 'figure break-all py-1 pr-3 align-top';
 
+type Named = Parameters<typeof changedFieldLabel>[0];
+
+/** The field in words, with its path below in small type for anyone who reads the file. */
+function FieldName({ doc, where }: { doc: Named; where: string }) {
+  const words = changedFieldLabel(doc, where);
+  return (
+    <th scope="row" className="py-1 pr-3 text-left align-top font-normal">
+      {words}
+      {words === where ? null : <span className="figure block text-xs break-all text-ink-soft">{where}</span>}
+    </th>
+  );
+}
+
 /** The fields one side changed since the common revision, with before and after values. */
-export function ChangeList({ title, changes, empty }: { title: string; changes: SideChange[]; empty: string }) {
+export function ChangeList({ title, changes, empty, doc }: { title: string; changes: SideChange[]; empty: string; doc: Named }) {
   if (changes.length === 0) return <p className="text-sm"><span className="font-semibold">{title}:</span> {empty}</p>;
   return (
     <div className="overflow-x-auto">
@@ -22,7 +36,7 @@ export function ChangeList({ title, changes, empty }: { title: string; changes: 
         <tbody>
           {changes.slice(0, SHOWN).map((c) => (
             <tr key={c.where} data-path={c.where} className="border-b border-line">
-              <th scope="row" className={`${cell} text-left font-normal`}>{c.where}</th>
+              <FieldName doc={doc} where={c.where} />
               <td className={`${cell} text-ink-soft`}>{displayValue(c.before)}</td>
               <td className={cell}>{displayValue(c.after)}</td>
             </tr>
@@ -34,7 +48,7 @@ export function ChangeList({ title, changes, empty }: { title: string; changes: 
   );
 }
 
-function Choice({ clash, side, chosen, onChoose }: { clash: Clash; side: Side; chosen: Side | undefined; onChoose: (where: string, side: Side) => void }) {
+function Choice({ clash, side, chosen, onChoose, name }: { clash: Clash; side: Side; chosen: Side | undefined; onChoose: (where: string, side: Side) => void; name: string }) {
   const verb = side === 'mine' ? 'Keep mine' : 'Take theirs';
   return (
     <label className="flex items-start gap-1.5">
@@ -44,7 +58,7 @@ function Choice({ clash, side, chosen, onChoose }: { clash: Clash; side: Side; c
         value={side}
         checked={chosen === side}
         onChange={() => onChoose(clash.where, side)}
-        aria-label={`${verb} for ${clash.where}`}
+        aria-label={`${verb} for ${name}`}
         className="mt-1"
       />
       <span>
@@ -56,7 +70,8 @@ function Choice({ clash, side, chosen, onChoose }: { clash: Clash; side: Side; c
 }
 
 /** Each field both sides changed differently, with a choice of which value the merged version keeps. */
-export function ClashTable({ clashes, choices, onChoose, theirRevision }: {
+export function ClashTable({ clashes, choices, onChoose, theirRevision, doc }: {
+  doc: Named;
   clashes: Clash[];
   choices: Readonly<Record<string, Side>>;
   onChoose: (where: string, side: Side) => void;
@@ -76,9 +91,9 @@ export function ClashTable({ clashes, choices, onChoose, theirRevision }: {
         <tbody>
           {clashes.map((c) => (
             <tr key={c.where} data-path={c.where} className="border-b border-line">
-              <th scope="row" className={`${cell} text-left font-normal`}>{c.where}</th>
-              <td className={cell}><Choice clash={c} side="theirs" chosen={choices[c.where]} onChoose={onChoose} /></td>
-              <td className={cell}><Choice clash={c} side="mine" chosen={choices[c.where]} onChoose={onChoose} /></td>
+              <FieldName doc={doc} where={c.where} />
+              <td className={cell}><Choice clash={c} side="theirs" chosen={choices[c.where]} onChoose={onChoose} name={changedFieldLabel(doc, c.where)} /></td>
+              <td className={cell}><Choice clash={c} side="mine" chosen={choices[c.where]} onChoose={onChoose} name={changedFieldLabel(doc, c.where)} /></td>
             </tr>
           ))}
         </tbody>
