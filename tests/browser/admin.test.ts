@@ -2,8 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNTS } from '../../server/db/demo-accounts';
 import { models } from '../../server/db/models';
 import { listCaughtMail } from '../../server/repos/mail';
-import { shown, startHarness } from './harness';
-import type { Harness, Session } from './harness';
+import { shown, signIn, startHarness } from './harness';
+import type { Harness } from './harness';
 
 // The invented demo accounts (server/db/demo-accounts.ts), passwords as published in README.
 let h: Harness;
@@ -17,14 +17,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await h?.close();
 });
-
-async function signIn(s: Session, email: string, password: string) {
-  await s.page.goto('/sign-in');
-  await s.page.getByLabel('E-mail address').fill(email);
-  await s.page.getByLabel('Password').fill(password);
-  await s.page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await s.page.getByText('Signed in as').waitFor();
-}
 
 describe('site administration in a browser', { timeout: 120_000 }, () => {
   it('shows the site admin a sign-in mail the fake mail server caught, with its link working', async () => {

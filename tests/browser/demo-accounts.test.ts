@@ -2,8 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNTS } from '../../server/db/demo-accounts';
 import { models } from '../../server/db/models';
 import { listCaughtMail } from '../../server/repos/mail';
-import { shown, startHarness } from './harness';
-import type { Harness, Session } from './harness';
+import { shown, signIn, startHarness } from './harness';
+import type { Harness } from './harness';
 
 // The invented demo co-operative, seen through its invented people (server/db/demo-accounts.ts).
 let h: Harness;
@@ -16,14 +16,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await h?.close();
 });
-
-async function signIn(s: Session, email: string, password: string) {
-  await s.page.goto('/sign-in');
-  await s.page.getByLabel('E-mail address').fill(email);
-  await s.page.getByLabel('Password').fill(password);
-  await s.page.getByRole('button', { name: 'Sign in', exact: true }).click();
-  await s.page.getByText('Signed in as').waitFor();
-}
 
 describe('the demo co-operative in a browser', { timeout: 120_000 }, () => {
   it('signs the demo grower in and finds the scenarios by searching their titles', async () => {

@@ -157,3 +157,12 @@ export async function shown(locator: Locator, timeout = 10_000): Promise<boolean
     return false;
   }
 }
+
+/** Signs a session in through the sign-in page, as a person would, and waits for the header to say so. */
+export async function signIn(s: Session, email: string, password: string): Promise<void> {
+  await s.page.goto('/sign-in');
+  await s.page.getByLabel('E-mail address').fill(email);
+  await s.page.getByLabel('Password').fill(password);
+  await s.page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await s.page.getByText('Signed in as').waitFor();
+}

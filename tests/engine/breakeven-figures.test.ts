@@ -1,30 +1,17 @@
-import { pv as annuityPv } from 'financial';
 import { describe, expect, it } from 'vitest';
-import type { OptionInput } from '../../src/contracts/scenario';
 import { MAX_PHOTON_EFFICACY } from '../../src/contracts/scenario';
 import { efficacyBreakevenFigures, presentValueGap } from '../../src/engine';
 import type { EfficacyBreakeven } from '../../src/engine';
-import { sixOptions } from '../sensitivity/fixtures';
+import { annuityRoom } from '../sensitivity/fixtures';
 
-const lampless = (id: string, wallWatts: number, photonEfficacy: number, fixturePrice: string): OptionInput =>
-  ({ id, label: id, technology: 'led', wallWatts, photonEfficacy, fixturePrice });
 
 const breakeven = (factor: number | null, hi = 10): EfficacyBreakeven =>
   ({ vary: 'a', against: 'b', factor, kind: factor === null ? null : 'crossing', gapAtFactor: null, searched: [0.1, hi] });
 
 describe('presentValueGap', () => {
-  // Two lampless options, exact counts, level prices, 6 % over 8 years: PV = n × price + E × tariff × AF,
-  // AF the uniform present value factor (NIST Handbook 135, Fuller and Petersen 1996) = −pv(0.06, 8, 1),
-  // pv from the financial package (port of numpy-financial).
-  const s = sixOptions({
-    canopy: { lengthM: 10, widthM: 5 }, target: { ppfd: 600 }, schedule: [{ label: 'lit', hoursPerDay: 12, daysPerYear: 360 }],
-    utilization: 1, levelAt: 'initial', fixtureCount: 'exact', horizonYears: 8, discountRatePct: 6,
-    electricity: { pricePerKwh: '0.2', escalationPctPerYear: 0, demandChargePerKwMonth: '0' }, cooling: undefined,
-    baseline: 'cheap', options: [lampless('cheap', 600, 1.5, '250'), lampless('frugal', 600, 2.8, '900')],
-  });
-  const af = -annuityPv(0.06, 8, 1);
-  const count = (eff: number) => (600 * 50) / (eff * 600);
-  const kwh = (eff: number) => (count(eff) * 600 * 12 * 360) / 1000;
+  // PV = n × price + E × tariff × AF in annuityRoom (NIST Handbook 135's uniform present value factor,
+  // via the financial package's pv, a port of numpy-financial).
+  const { scenario: s, af, count, kwh } = annuityRoom();
   const pv = (eff: number, price: number, tariff: number) => count(eff) * price + kwh(eff) * tariff * af;
 
   it('matches the annuity present values worked with the financial package at the scenario price', () => {

@@ -1,26 +1,13 @@
 import fc from 'fast-check';
-import { pv as annuityPv } from 'financial';
 import { describe, expect, it } from 'vitest';
-import type { OptionInput } from '../../src/contracts/scenario';
 import { breakevenEfficacy, breakevenPrice, computeScenario, ledgerPresentValues } from '../../src/engine';
-import { relDiff, roomArb, sixOptions, withPriceAndFactor } from './fixtures';
+import { annuityRoom, lampless, relDiff, roomArb, sixOptions, withPriceAndFactor } from './fixtures';
 
-const lampless = (id: string, wallWatts: number, photonEfficacy: number, fixturePrice: string): OptionInput =>
-  ({ id, label: id, technology: 'led', wallWatts, photonEfficacy, fixturePrice });
 
 describe('breakevenPrice', () => {
   it('matches the annuity break-even worked with the financial package (port of numpy-financial) pv', () => {
-    // Two lampless options, exact counts, level prices, 6 % over 8 years: PV = n × capex + E × price × AF,
-    // AF the uniform present value factor (NIST Handbook 135, Fuller and Petersen 1996) = −pv(0.06, 8, 1).
-    const s = sixOptions({
-      canopy: { lengthM: 10, widthM: 5 }, target: { ppfd: 600 }, schedule: [{ label: 'lit', hoursPerDay: 12, daysPerYear: 360 }],
-      utilization: 1, levelAt: 'initial', fixtureCount: 'exact', horizonYears: 8, discountRatePct: 6,
-      electricity: { pricePerKwh: '0.2', escalationPctPerYear: 0, demandChargePerKwMonth: '0' }, cooling: undefined,
-      baseline: 'cheap', options: [lampless('cheap', 600, 1.5, '250'), lampless('frugal', 600, 2.8, '900')],
-    });
-    const af = -annuityPv(0.06, 8, 1);
-    const count = (eff: number) => (600 * 50) / (eff * 600);
-    const kwh = (eff: number) => (count(eff) * 600 * 12 * 360) / 1000;
+    // PV = n × capex + E × price × AF in annuityRoom (NIST Handbook 135's uniform present value factor, via financial's pv).
+    const { scenario: s, af, count, kwh } = annuityRoom();
     const expected = (count(2.8) * 900 - count(1.5) * 250) / ((kwh(1.5) - kwh(2.8)) * af);
     const r = breakevenPrice(s, { a: 'cheap', b: 'frugal' });
     expect(r.pricePerKwh).not.toBeNull();

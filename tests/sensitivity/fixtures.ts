@@ -1,4 +1,5 @@
 import fc from 'fast-check';
+import { pv as annuityPv } from 'financial';
 import type { OptionInput, Scenario, ScenarioInput } from '../../src/contracts/scenario';
 import { parseScenario } from '../../src/engine';
 
@@ -101,4 +102,25 @@ export function pathKeysForTest<T>(root: T, path: string, value: unknown): T {
     return { ...rec, [k]: put(rec[k], at + 1) };
   };
   return put(root, 0) as T;
+}
+
+/** A lampless LED option at a flat price, for rooms whose present values have a closed form. */
+export const lampless = (id: string, wallWatts: number, photonEfficacy: number, fixturePrice: string): OptionInput =>
+  ({ id, label: id, technology: 'led', wallWatts, photonEfficacy, fixturePrice });
+
+/**
+ * Two lampless options ("cheap": 1.5 µmol/J at 250 each, "frugal": 2.8 µmol/J at 900 each) in a 50 m²
+ * room at 600 µmol m⁻² s⁻¹, exact counts, level prices, 6 % over 8 years, 0.2 per kWh: PV = n × price
+ * + E × tariff × AF, with AF the uniform present value factor (NIST Handbook 135, Fuller and
+ * Petersen 1996) = −pv(0.06, 8, 1), pv from the financial package (a port of numpy-financial).
+ */
+export function annuityRoom(): { scenario: Scenario; af: number; count: (eff: number) => number; kwh: (eff: number) => number } {
+  const scenario = sixOptions({
+    canopy: { lengthM: 10, widthM: 5 }, target: { ppfd: 600 }, schedule: [{ label: 'lit', hoursPerDay: 12, daysPerYear: 360 }],
+    utilization: 1, levelAt: 'initial', fixtureCount: 'exact', horizonYears: 8, discountRatePct: 6,
+    electricity: { pricePerKwh: '0.2', escalationPctPerYear: 0, demandChargePerKwMonth: '0' }, cooling: undefined,
+    baseline: 'cheap', options: [lampless('cheap', 600, 1.5, '250'), lampless('frugal', 600, 2.8, '900')],
+  });
+  const count = (eff: number) => (600 * 50) / (eff * 600);
+  return { scenario, af: -annuityPv(0.06, 8, 1), count, kwh: (eff) => (count(eff) * 600 * 12 * 360) / 1000 };
 }

@@ -2,11 +2,11 @@ import { useMemo } from 'react';
 import type { AnalysisSettings } from '../../../contracts/api/analysis';
 import type { Scenario } from '../../../contracts/scenario';
 import { numericInputs } from '../../../engine/sensitivity/inputs';
-import type { UncertaintySummary } from '../../../engine/sensitivity/uncertainty';
+import { UncertaintyTable } from '../../../components/results/uncertainty-table';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
-import { formatMoney, formatNumber } from '../../../lib/format';
-import { inputLabel, optionLabel } from '../../../lib/scenario-labels';
+import { formatNumber } from '../../../lib/format';
+import { inputLabel } from '../../../lib/scenario-labels';
 import { checkUncertaintyDraft } from '../../../lib/uncertainty-draft';
 import { useUncertaintyRerun } from '../hooks/use-uncertainty-rerun';
 
@@ -63,7 +63,12 @@ export function SnapshotUncertainty({ scenario: s, settings }: { scenario: Scena
           <Button size="sm" onClick={() => void run()} busy={state.status === 'running'}>
             {state.status === 'running' ? `Drawing… ${formatNumber((100 * state.done) / state.total, 0)} %` : 'Run these draws here'}
           </Button>
-          {state.status === 'done' ? <RerunTable scenario={s} summary={state.summary} /> : null}
+          {state.status === 'done' ? (
+            <UncertaintyTable result={state.summary} scenario={s} label="Uncertainty run recomputed here" withMean={false} exact>
+              Present values over {s.horizonYears} years. P10, P50 and P90: the present value that 10 %, 50 % and 90 % of the draws stay at or
+              below (sample quantiles, definition 7 of Hyndman and Fan, 1996). Ties for cheapest go to the option listed first.
+            </UncertaintyTable>
+          ) : null}
           {state.status === 'failed' ? <Notice tone="error" title="The run stopped">{state.message}</Notice> : null}
         </div>
       ) : (
@@ -77,41 +82,3 @@ export function SnapshotUncertainty({ scenario: s, settings }: { scenario: Scena
   );
 }
 
-function RerunTable({ scenario: s, summary }: { scenario: Scenario; summary: UncertaintySummary }) {
-  const money = (v: number) => formatMoney(String(v), s.currency);
-  return (
-    <div className="overflow-x-auto">
-      <table className="w-full border-collapse" aria-label="Uncertainty run recomputed here">
-        <thead>
-          <tr className="border-b border-line-strong text-right text-ink-soft">
-            <th scope="col" className="text-left font-medium">Option</th>
-            <th scope="col" className="px-2 font-medium">Chance of being cheapest</th>
-            <th scope="col" className="px-2 font-medium">P10</th>
-            <th scope="col" className="px-2 font-medium">P50</th>
-            <th scope="col" className="px-2 font-medium">P90</th>
-          </tr>
-        </thead>
-        <tbody>
-          {summary.options.map((o) => (
-            <tr
-              key={o.id}
-              className="border-b border-line text-right"
-              data-option={o.id}
-              data-exact={JSON.stringify({ chanceCheapest: o.chanceCheapest, p10: o.p10, p50: o.p50, p90: o.p90 })}
-            >
-              <th scope="row" className="text-left font-normal">{optionLabel(s, o.id)}</th>
-              <td className="figure px-2">{formatNumber(100 * o.chanceCheapest, 1)} %</td>
-              <td className="figure px-2">{money(o.p10)}</td>
-              <td className="figure px-2">{money(o.p50)}</td>
-              <td className="figure px-2">{money(o.p90)}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-      <p className="mt-1 text-xs text-ink-soft">
-        Present values over {s.horizonYears} years. P10, P50 and P90: the present value that 10 %, 50 % and 90 % of the draws stay at or
-        below (sample quantiles, definition 7 of Hyndman and Fan, 1996). Ties for cheapest go to the option listed first.
-      </p>
-    </div>
-  );
-}

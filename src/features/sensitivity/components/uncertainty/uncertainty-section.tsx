@@ -12,7 +12,7 @@ import type { OptionStyle } from '../../lib/option-colours';
 import { DraftNumber } from '../draft-field';
 import { RunControls } from '../run-controls';
 import { UncertaintyInputs } from './uncertainty-inputs';
-import { UncertaintyTable } from './uncertainty-table';
+import { UncertaintyTable } from '../../../../components/results/uncertainty-table';
 
 const UncertaintyCharts = lazy(() => import('./uncertainty-charts'));
 
@@ -49,7 +49,10 @@ export function UncertaintySection({ scenario, draft, onDraft, styles }: {
           <Suspense fallback={<LoadingState what="Drawing the charts" />}>
             <UncertaintyCharts result={result} scenario={scenario} styles={styles} />
           </Suspense>
-          <UncertaintyTable result={result} scenario={scenario} />
+          <UncertaintyTable result={result} scenario={scenario} label="Uncertainty results by option" className="text-sm">
+            P10, P50 and P90: the present value that 10 %, 50 % and 90 % of the draws stay at or below (sample quantiles by linear
+            interpolation, definition 7 of Hyndman and Fan, 1996). Ties for cheapest go to the option listed first.
+          </UncertaintyTable>
         </div>
       ) : null}
     </Panel>
